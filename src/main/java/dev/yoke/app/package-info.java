@@ -1,0 +1,2 @@
+/** The entry point alone: parses nothing, computes nothing, exits. */
+package dev.yoke.app;
