@@ -45,6 +45,7 @@ public final class FieldForm extends AbstractInteractableComponent<FieldForm> {
     private int visibleRows;
     private int selected;
     private int top;
+    private int selectedLine;
     private boolean changedSinceCommit;
     private Consumer<FieldForm> editListener = f -> { };
     private Consumer<FieldForm> commitListener = f -> { };
@@ -111,22 +112,13 @@ public final class FieldForm extends AbstractInteractableComponent<FieldForm> {
         return Collections.unmodifiableMap(new LinkedHashMap<>(problems));
     }
 
-    /** One line saying why the form cannot be used, e.g. {@code 2 problems: resistance: …}. */
+    /** One short line saying why the form cannot be used, e.g. {@code 2 problems: resistance, peak_current}. */
     public synchronized String problemSummary() {
         if (problems.isEmpty()) {
             return "";
         }
-        StringBuilder b = new StringBuilder();
-        b.append(problems.size() == 1 ? "1 problem: " : problems.size() + " problems: ");
-        boolean first = true;
-        for (Map.Entry<String, String> e : problems.entrySet()) {
-            if (!first) {
-                b.append("; ");
-            }
-            b.append(e.getKey()).append(": ").append(e.getValue());
-            first = false;
-        }
-        return b.toString();
+        return (problems.size() == 1 ? "1 problem: " : problems.size() + " problems: ")
+                + String.join(", ", problems.keySet());
     }
 
     /** The key of the field under the cursor. */
@@ -209,13 +201,48 @@ public final class FieldForm extends AbstractInteractableComponent<FieldForm> {
         invalidate();
     }
 
+    /** Nothing to do until drawing: lines depend on the width (a long message takes its own line). */
     private void scrollToSelected() {
-        if (selected < top) {
-            top = selected;
-        } else if (selected >= top + visibleRows) {
-            top = selected - visibleRows + 1;
+        invalidate();
+    }
+
+    /** Display lines for a width: each field, then its message when it does not fit beside it. */
+    private List<int[]> layout(int width) {
+        List<int[]> lines = new ArrayList<>();
+        int messageColumn = messageColumn();
+        for (int i = 0; i < fields.size(); i++) {
+            lines.add(new int[] {i, 0});
+            String p = problems.get(fields.get(i).key());
+            if (p != null && TerminalTextUtils.getColumnWidth("! " + p) > width - messageColumn) {
+                lines.add(new int[] {i, 1});
+            }
         }
-        top = Math.max(0, Math.min(top, Math.max(0, fields.size() - visibleRows)));
+        return lines;
+    }
+
+    private int messageColumn() {
+        return 4 + labelWidth + 1 + VALUE_WIDTH + 2 + 1 + unitWidth + 2;
+    }
+
+    /** Moves {@code top} so that the selected field and its message line are on screen. */
+    private void fitTop(List<int[]> lines, int rows) {
+        int first = -1;
+        int last = -1;
+        for (int n = 0; n < lines.size(); n++) {
+            if (lines.get(n)[0] == selected) {
+                last = n;
+                if (first < 0) {
+                    first = n;
+                }
+            }
+        }
+        if (first < top) {
+            top = first;
+        } else if (last >= top + rows) {
+            top = last - rows + 1;
+        }
+        top = Math.max(0, Math.min(top, Math.max(0, lines.size() - rows)));
+        selectedLine = first - top;
     }
 
     private void commit() {
@@ -313,8 +340,8 @@ public final class FieldForm extends AbstractInteractableComponent<FieldForm> {
         @Override
         public TerminalSize getPreferredSize(FieldForm form) {
             synchronized (form) {
-                int width = 4 + form.labelWidth + 1 + VALUE_WIDTH + 2 + 1 + form.unitWidth + 2 + 30;
-                return new TerminalSize(width, Math.min(form.visibleRows, form.fields.size()));
+                int width = form.messageColumn() + 30;
+                return new TerminalSize(width, form.visibleRows);
             }
         }
 
@@ -327,7 +354,7 @@ public final class FieldForm extends AbstractInteractableComponent<FieldForm> {
                 LineEditor e = form.editors.get(form.selected);
                 int caretColumn = TerminalTextUtils.getColumnWidth(
                         e.text().substring(e.scrollFor(VALUE_WIDTH), e.caret()));
-                return new TerminalPosition(4 + form.labelWidth + 2 + caretColumn, form.selected - form.top);
+                return new TerminalPosition(4 + form.labelWidth + 2 + caretColumn, form.selectedLine);
             }
         }
 
@@ -336,29 +363,39 @@ public final class FieldForm extends AbstractInteractableComponent<FieldForm> {
             synchronized (form) {
                 int width = g.getSize().getColumns();
                 int rows = g.getSize().getRows();
-                if (rows != form.visibleRows && rows > 0) {
-                    form.visibleRows = rows;
-                    form.scrollToSelected();
+                if (rows <= 0) {
+                    return;
                 }
+                List<int[]> lines = form.layout(width);
+                form.fitTop(lines, rows);
                 g.applyThemeStyle(form.getThemeDefinition().getNormal());
                 g.fill(' ');
                 for (int line = 0; line < rows; line++) {
-                    int i = form.top + line;
-                    if (i >= form.fields.size()) {
+                    int n = form.top + line;
+                    if (n >= lines.size()) {
                         break;
                     }
-                    drawLine(g, form, i, line, width);
+                    int[] entry = lines.get(n);
+                    if (entry[1] == 0) {
+                        drawLine(g, form, entry[0], line, width, n + 1 < lines.size() && lines.get(n + 1)[1] == 1);
+                    } else {
+                        String p = form.problems.get(form.fields.get(entry[0]).key());
+                        int x = 4 + form.labelWidth + 1;
+                        g.putString(2, line, "!");
+                        g.putString(x, line, TerminalTextUtils.fitString("! " + p, Math.max(0, width - x)));
+                    }
                 }
                 if (form.top > 0) {
                     g.putString(0, 0, "^");
                 }
-                if (form.top + rows < form.fields.size()) {
+                if (form.top + rows < lines.size()) {
                     g.putString(0, rows - 1, "v");
                 }
             }
         }
 
-        private static void drawLine(TextGUIGraphics g, FieldForm form, int i, int line, int width) {
+        private static void drawLine(TextGUIGraphics g, FieldForm form, int i, int line, int width,
+                                     boolean messageBelow) {
             FieldSpec f = form.fields.get(i);
             boolean current = i == form.selected;
             String problem = form.problems.get(f.key());
@@ -393,7 +430,7 @@ public final class FieldForm extends AbstractInteractableComponent<FieldForm> {
             int ux = x + VALUE_WIDTH + 3;
             g.putString(ux, line, f.unit());
             int mx = ux + form.unitWidth + 2;
-            if (problem != null && mx < width) {
+            if (problem != null && !messageBelow && mx < width) {
                 g.putString(mx, line, TerminalTextUtils.fitString("! " + problem, width - mx));
             }
         }

@@ -65,8 +65,8 @@ public final class ScenarioEditor extends BasicWindow {
         this.saved = scenario;
         setHints(List.of(Window.Hint.FULL_SCREEN, Window.Hint.NO_DECORATIONS));
         TerminalSize screen = gui.getScreen().getTerminalSize();
-        int spare = Math.max(8, screen.getRows() - 8);
-        int formRows = Math.max(4, spare * 11 / 19);
+        int spare = Math.max(8, screen.getRows() - 6);
+        int formRows = Math.max(4, spare * 10 / 18);
         int tableRows = Math.max(3, spare - formRows);
         form = new FieldForm(ScenarioFields.fields(), ScenarioFields.rules(), formRows);
         ScenarioFields.fill(form, scenario);
@@ -163,7 +163,9 @@ public final class ScenarioEditor extends BasicWindow {
         if (p.isEmpty()) {
             return "";
         }
-        return (p.size() == 1 ? "1 problem: " : p.size() + " problems: ") + String.join("; ", p);
+        List<String> where = new ArrayList<>(form.problems().keySet());
+        where.addAll(table.problemPlaces());
+        return (p.size() == 1 ? "1 problem: " : p.size() + " problems: ") + String.join(", ", where);
     }
 
     private void refresh() {

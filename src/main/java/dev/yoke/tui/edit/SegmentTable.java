@@ -34,7 +34,7 @@ public final class SegmentTable extends AbstractInteractableComponent<SegmentTab
             FieldSpec.quantity("speed_start", Quantities.RADIANS_PER_SECOND, FieldCheck.ANY),
             FieldSpec.quantity("speed_end", Quantities.RADIANS_PER_SECOND, FieldCheck.ANY),
             FieldSpec.quantity("torque", Quantities.NEWTON_METRES, FieldCheck.ANY));
-    private static final int[] WIDTHS = {14, 10, 13, 13, 12};
+    private static final int[] WIDTHS = {14, 11, 14, 14, 14};
     private static final int ROW_MARK = 2;
     private static final int NUMBER = 3;
 
@@ -116,6 +116,22 @@ public final class SegmentTable extends AbstractInteractableComponent<SegmentTab
                 String p = problem(r, c);
                 if (p != null) {
                     out.add("segment " + (r + 1) + " " + COLUMNS.get(c).key() + ": " + p);
+                }
+            }
+        }
+        return out;
+    }
+
+    /** Where each problem is, as {@code segment 2 duration}. */
+    public synchronized List<String> problemPlaces() {
+        List<String> out = new ArrayList<>();
+        if (rows.isEmpty()) {
+            out.add("segments (none)");
+        }
+        for (int r = 0; r < rows.size(); r++) {
+            for (int c = 0; c < COLUMNS.size(); c++) {
+                if (problem(r, c) != null) {
+                    out.add("segment " + (r + 1) + " " + COLUMNS.get(c).key());
                 }
             }
         }
@@ -387,8 +403,7 @@ public final class SegmentTable extends AbstractInteractableComponent<SegmentTab
                 g.putString(ROW_MARK, 0, " # ");
                 for (int c = 0; c < COLUMNS.size(); c++) {
                     FieldSpec spec = COLUMNS.get(c);
-                    String head = spec.unit().isEmpty() ? spec.key() : spec.key() + " " + spec.unit();
-                    g.putString(columnX(c) + 1, 0, TerminalTextUtils.fitString(head.replace('_', ' '), WIDTHS[c] - 1));
+                    g.putString(columnX(c) + 1, 0, TerminalTextUtils.fitString(spec.key().replace('_', ' '), WIDTHS[c] - 1));
                 }
                 if (t.rows.isEmpty()) {
                     g.putString(ROW_MARK, 1, "(no segments: a adds one)");

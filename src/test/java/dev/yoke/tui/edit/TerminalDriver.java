@@ -42,9 +42,8 @@ final class TerminalDriver implements AutoCloseable {
     TerminalDriver type(String text) {
         for (char c : text.toCharArray()) {
             terminal.addInput(new KeyStroke(c, false, false));
-            update();
         }
-        return this;
+        return update();
     }
 
     TerminalDriver press(KeyType key) {
@@ -54,14 +53,14 @@ final class TerminalDriver implements AutoCloseable {
 
     TerminalDriver press(KeyType key, int times) {
         for (int i = 0; i < times; i++) {
-            press(key);
+            terminal.addInput(new KeyStroke(key));
         }
-        return this;
+        return update();
     }
 
     /** Empties the field under the cursor (End, then Backspace over every character). */
     TerminalDriver clearField(int length) {
-        press(KeyType.End);
+        terminal.addInput(new KeyStroke(KeyType.End));
         return press(KeyType.Backspace, length);
     }
 
@@ -69,6 +68,17 @@ final class TerminalDriver implements AutoCloseable {
     String text() {
         update();
         return terminal.toString();
+    }
+
+    /** The first screen line containing {@code needle} and the line below it (where a long message goes). */
+    String lineWithNext(String needle) {
+        String[] lines = text().split("\n");
+        for (int i = 0; i < lines.length; i++) {
+            if (lines[i].contains(needle)) {
+                return lines[i] + "\n" + (i + 1 < lines.length ? lines[i + 1] : "");
+            }
+        }
+        throw new AssertionError("'" + needle + "' is not on screen:\n" + String.join("\n", lines));
     }
 
     @Override
