@@ -346,20 +346,25 @@ public final class PartsEditor extends BasicWindow {
             }
             write(change, done);
         });
-        answers.put("Keep both", () -> {
-            try {
-                Path beside = store.applyBeside(change);
-                written(change, "Kept " + file.getFileName() + " as it is on disk; your version is in " + beside);
-                done.accept(null);
-            } catch (IOException | RuntimeException e) {
-                message = "NOT saved: " + e.getMessage();
-                refresh();
-                done.accept(message);
-            }
-        });
+        if (change instanceof PartChange.Put) {
+            answers.put("Keep both", () -> keepBoth(change, file, done));
+        }
         answers.put("Back", () -> done.accept("NOT saved: " + file + " changed on disk; nothing written"));
         ChoiceWindow.ask(gui, "File changed on disk",
                 file + " was changed by someone else since it was loaded.", answers);
+    }
+
+    private void keepBoth(PartChange change, Path file, Consumer<String> done) {
+        try {
+            PartStore.Kept kept = store.applyBeside(change);
+            written(change, "Kept " + file.getFileName() + " as it is on disk; yours is " + kept.id()
+                    + " in " + kept.file());
+            done.accept(null);
+        } catch (IOException | RuntimeException e) {
+            message = "NOT saved: " + e.getMessage();
+            refresh();
+            done.accept(message);
+        }
     }
 
     private void written(PartChange change, String text) {
