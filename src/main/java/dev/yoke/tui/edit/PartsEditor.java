@@ -35,7 +35,7 @@ import java.util.function.Consumer;
 public final class PartsEditor extends BasicWindow {
 
     private static final String LIST_KEYS =
-            "Up/Down part  Tab motors/switches  / filter  Enter edit  a add  c copy  d delete  Esc close";
+            "Tab motors/switches  / filter  Enter edit  a add  c copy  d delete  Esc close";
     private static final String FILTER_KEYS = "type to filter by id or label  Enter keep filter  Esc clear filter";
 
     private final WindowBasedTextGUI gui;
@@ -61,7 +61,8 @@ public final class PartsEditor extends BasicWindow {
         list = new PartListView(gui.getScreen().getTerminalSize().getRows() - 4);
         Panel panel = new Panel(new LinearLayout(Direction.VERTICAL).setSpacing(0));
         panel.addComponent(title);
-        panel.addComponent(list);
+        panel.addComponent(list, LinearLayout.createLayoutData(LinearLayout.Alignment.Fill,
+                LinearLayout.GrowPolicy.CanGrow));
         panel.addComponent(status);
         panel.addComponent(keys);
         setComponent(panel);
