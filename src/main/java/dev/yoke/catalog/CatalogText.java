@@ -85,6 +85,19 @@ final class CatalogText {
         return text;
     }
 
+    /** The keys part {@code id} of list {@code listKey} spells out, in file order (empty when absent). */
+    List<String> keysOf(String listKey, String id) {
+        List<String> keys = new ArrayList<>();
+        item(listKey, id).ifPresent(item -> {
+            for (NodeTuple tuple : item.getValue()) {
+                if (tuple.getKeyNode() instanceof ScalarNode key) {
+                    keys.add(key.getValue());
+                }
+            }
+        });
+        return keys;
+    }
+
     /** Whether list {@code listKey} holds a part with this id. */
     boolean contains(String listKey, String id) {
         return item(listKey, id).isPresent();
