@@ -1,0 +1,115 @@
+package dev.yoke.catalog;
+
+import dev.yoke.model.Catalog;
+import dev.yoke.model.Motor;
+import dev.yoke.model.PowerSwitch;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Set;
+import java.util.stream.Stream;
+
+/**
+ * Loads a parts catalog: every {@code *.yaml} / {@code *.yml} file of a folder, in name order.
+ * All problems of all files are collected before giving up, so one run reports them all.
+ */
+public final class CatalogLoader {
+
+    private CatalogLoader() {
+    }
+
+    /**
+     * Every YAML file directly inside {@code dir}, sorted by name.
+     *
+     * @throws InputException when the folder is missing or any file is broken
+     */
+    public static LoadedCatalog load(Path dir) throws InputException {
+        return loadFiles(catalogFiles(dir));
+    }
+
+    /** The catalog files of {@code dir}, sorted by name. */
+    public static List<Path> catalogFiles(Path dir) throws InputException {
+        if (!Files.isDirectory(dir)) {
+            throw new InputException(List.of(Problem.error(dir, 0, 0, "",
+                    Files.exists(dir) ? "is not a folder; give the catalog folder" : "no such catalog folder")));
+        }
+        try (Stream<Path> entries = Files.list(dir)) {
+            return entries.filter(p -> {
+                String name = p.getFileName().toString().toLowerCase(Locale.ROOT);
+                return (name.endsWith(".yaml") || name.endsWith(".yml")) && !name.startsWith(".")
+                        && Files.isRegularFile(p);
+            }).sorted().toList();
+        } catch (IOException e) {
+            throw new InputException(List.of(Problem.error(dir, 0, 0, "", "cannot be listed: " + e.getMessage())));
+        }
+    }
+
+    /**
+     * The given files as one catalog. Ids must be unique across all of them.
+     *
+     * @throws InputException listing every error (and the warnings found alongside)
+     */
+    public static LoadedCatalog loadFiles(List<Path> paths) throws InputException {
+        List<Problem> problems = new ArrayList<>();
+        List<Motor> motors = new ArrayList<>();
+        List<PowerSwitch> switches = new ArrayList<>();
+        Map<String, Origin> motorOrigins = new LinkedHashMap<>();
+        Map<String, Origin> switchOrigins = new LinkedHashMap<>();
+        List<CatalogFile> files = new ArrayList<>();
+        Set<String> implausible = new LinkedHashSet<>();
+        for (Path path : paths) {
+            SourceFile source = SourceFile.read(path, problems);
+            if (source == null) {
+                continue;
+            }
+            files.add(source.identity());
+            YamlNode root = YamlReader.read(path, source.bytes(), problems);
+            if (root == null) {
+                continue;
+            }
+            SectionReader sections = new SectionReader(path, problems);
+            CatalogReader reader = new CatalogReader(sections);
+            reader.read(root);
+            for (CatalogReader.Located<Motor> m : reader.motors) {
+                if (unique(path, m, m.part().id(), "motor", motorOrigins, problems)) {
+                    motors.add(m.part());
+                    motorOrigins.put(m.part().id(), new Origin(path, m.line()));
+                    if (m.implausible()) {
+                        implausible.add(m.part().id());
+                    }
+                }
+            }
+            for (CatalogReader.Located<PowerSwitch> s : reader.switches) {
+                if (unique(path, s, s.part().id(), "switch", switchOrigins, problems)) {
+                    switches.add(s.part());
+                    switchOrigins.put(s.part().id(), new Origin(path, s.line()));
+                    if (s.implausible()) {
+                        implausible.add(s.part().id());
+                    }
+                }
+            }
+        }
+        if (problems.stream().anyMatch(p -> !p.warning())) {
+            throw new InputException(problems);
+        }
+        return new LoadedCatalog(new Catalog(motors, switches), motorOrigins, switchOrigins, files, problems,
+                implausible);
+    }
+
+    private static boolean unique(Path path, CatalogReader.Located<?> part, String id, String noun,
+            Map<String, Origin> seen, List<Problem> problems) {
+        Origin first = seen.get(id);
+        if (first == null) {
+            return true;
+        }
+        problems.add(Problem.error(path, part.idLine(), part.idColumn(), "id", "duplicate " + noun + " id '" + id
+                + "': also defined at " + first));
+        return false;
+    }
+}

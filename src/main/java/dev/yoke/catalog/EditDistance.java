@@ -1,0 +1,28 @@
+package dev.yoke.catalog;
+
+/** Levenshtein distance (Levenshtein 1966; Wagner–Fischer dynamic programme), for "did you mean" hints. */
+final class EditDistance {
+
+    private EditDistance() {
+    }
+
+    /** The fewest single-character insertions, deletions or substitutions turning {@code a} into {@code b}. */
+    static int between(String a, String b) {
+        int[] previous = new int[b.length() + 1];
+        int[] current = new int[b.length() + 1];
+        for (int j = 0; j <= b.length(); j++) {
+            previous[j] = j;
+        }
+        for (int i = 1; i <= a.length(); i++) {
+            current[0] = i;
+            for (int j = 1; j <= b.length(); j++) {
+                int cost = a.charAt(i - 1) == b.charAt(j - 1) ? 0 : 1;
+                current[j] = Math.min(Math.min(current[j - 1] + 1, previous[j] + 1), previous[j - 1] + cost);
+            }
+            int[] swap = previous;
+            previous = current;
+            current = swap;
+        }
+        return previous[b.length()];
+    }
+}

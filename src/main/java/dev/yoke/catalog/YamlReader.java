@@ -1,0 +1,257 @@
+package dev.yoke.catalog;
+
+import com.fasterxml.jackson.core.JsonLocation;
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.core.JsonToken;
+import com.fasterxml.jackson.core.StreamReadConstraints;
+import com.fasterxml.jackson.dataformat.yaml.YAMLFactory;
+import com.fasterxml.jackson.dataformat.yaml.YAMLParser;
+import java.io.IOException;
+import java.nio.ByteBuffer;
+import java.nio.CharBuffer;
+import java.nio.charset.CharsetDecoder;
+import java.nio.charset.CoderResult;
+import java.nio.charset.CodingErrorAction;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import org.yaml.snakeyaml.LoaderOptions;
+import org.yaml.snakeyaml.error.MarkedYAMLException;
+
+/**
+ * Turns the bytes of a YAML file into a {@link YamlNode} tree that keeps the line and column of
+ * every key and value, refusing hostile or broken input with located problems, never an exception.
+ *
+ * <p>Defences: a size cap checked before parsing; UTF-8 only (a byte-order mark is skipped,
+ * invalid bytes are located); SnakeYAML's own limits on nesting and size; a depth cap of our
+ * own; aliases refused outright (no "billion laughs" expansion can happen); duplicate keys
+ * reported with both lines; a single document per file.
+ */
+final class YamlReader {
+
+    /** Largest file read, bytes: far above any real catalog (about 10 000 parts), far below memory trouble. */
+    static final int MAX_FILE_BYTES = 8 * 1024 * 1024;
+
+    /** Deepest nesting accepted; our formats need 4 levels. */
+    static final int MAX_DEPTH = 20;
+
+    private static final YAMLFactory FACTORY = createFactory();
+
+    private final Path file;
+    private final List<Problem> problems;
+
+    private YamlReader(Path file, List<Problem> problems) {
+        this.file = file;
+        this.problems = problems;
+    }
+
+    private static YAMLFactory createFactory() {
+        LoaderOptions options = new LoaderOptions();
+        options.setMaxAliasesForCollections(50);
+        options.setNestingDepthLimit(MAX_DEPTH + 10);
+        options.setCodePointLimit(MAX_FILE_BYTES);
+        options.setAllowDuplicateKeys(false);
+        options.setAllowRecursiveKeys(false);
+        return YAMLFactory.builder()
+                .loaderOptions(options)
+                .streamReadConstraints(StreamReadConstraints.builder()
+                        .maxNestingDepth(MAX_DEPTH + 10)
+                        .maxStringLength(MAX_FILE_BYTES)
+                        .maxNumberLength(1000)
+                        .build())
+                .build();
+    }
+
+    /**
+     * The tree of {@code bytes} read from {@code file}, or null when the file cannot be read as one
+     * YAML document; every problem found is added to {@code problems}.
+     */
+    static YamlNode read(Path file, byte[] bytes, List<Problem> problems) {
+        return new YamlReader(file, problems).read(bytes);
+    }
+
+    private YamlNode read(byte[] bytes) {
+        if (bytes.length > MAX_FILE_BYTES) {
+            fileProblem(tooLarge(bytes.length));
+            return null;
+        }
+        int start = 0;
+        if (bytes.length >= 3 && (bytes[0] & 0xff) == 0xEF && (bytes[1] & 0xff) == 0xBB && (bytes[2] & 0xff) == 0xBF) {
+            start = 3; // UTF-8 byte-order mark: harmless, skipped
+        } else if (bytes.length >= 2 && ((bytes[0] & 0xff) == 0xFE && (bytes[1] & 0xff) == 0xFF
+                || (bytes[0] & 0xff) == 0xFF && (bytes[1] & 0xff) == 0xFE)) {
+            fileProblem("the file is UTF-16; save it as UTF-8");
+            return null;
+        }
+        String text = decode(bytes, start);
+        if (text == null) {
+            return null;
+        }
+        if (text.isBlank()) {
+            fileProblem("the file is empty");
+            return null;
+        }
+        try (YAMLParser parser = (YAMLParser) FACTORY.createParser(text)) {
+            JsonToken first = parser.nextToken();
+            if (first == null) {
+                fileProblem("the file holds no data (only comments or blank lines)");
+                return null;
+            }
+            YamlNode root = readValue(parser, first, 0);
+            JsonToken more = parser.nextToken();
+            if (more != null) {
+                JsonLocation at = parser.currentTokenLocation();
+                problems.add(Problem.error(file, at.getLineNr(), at.getColumnNr(), "",
+                        "a second YAML document starts here; keep one document per file"));
+                return null;
+            }
+            return root;
+        } catch (Abandon e) {
+            return null; // the reason is already recorded
+        } catch (JsonProcessingException e) {
+            problems.add(fromJackson(e));
+        } catch (IOException | RuntimeException | StackOverflowError e) {
+            problems.add(fromOther(e));
+        }
+        return null;
+    }
+
+    static String tooLarge(long size) {
+        return String.format(java.util.Locale.ROOT,
+                "the file is %.1f MB; files larger than %d MB are refused (is it really a Yoke file?)",
+                size / 1048576.0, MAX_FILE_BYTES / 1048576);
+    }
+
+    private String decode(byte[] bytes, int start) {
+        CharsetDecoder decoder = StandardCharsets.UTF_8.newDecoder()
+                .onMalformedInput(CodingErrorAction.REPORT)
+                .onUnmappableCharacter(CodingErrorAction.REPORT);
+        ByteBuffer in = ByteBuffer.wrap(bytes, start, bytes.length - start);
+        CharBuffer out = CharBuffer.allocate(bytes.length);
+        CoderResult result = decoder.decode(in, out, true);
+        if (result.isError()) {
+            int bad = in.position();
+            int line = 1;
+            int lineStart = start;
+            for (int i = start; i < bad; i++) {
+                if (bytes[i] == '\n') {
+                    line++;
+                    lineStart = i + 1;
+                }
+            }
+            problems.add(Problem.error(file, line, bad - lineStart + 1, "",
+                    String.format("invalid UTF-8 (byte 0x%02X at offset %d); save the file as UTF-8 text",
+                            bytes[bad] & 0xff, bad)));
+            return null;
+        }
+        decoder.flush(out);
+        out.flip();
+        return out.toString();
+    }
+
+    private YamlNode readValue(YAMLParser parser, JsonToken token, int depth) throws IOException {
+        JsonLocation at = parser.currentTokenLocation();
+        int line = at.getLineNr();
+        int column = at.getColumnNr();
+        if (parser.isCurrentAlias()) {
+            problems.add(Problem.error(file, line, column, "",
+                    "aliases ('*" + parser.getText() + "') are not supported; write the value out"));
+            return new YamlNode.Scalar("", true, line, column);
+        }
+        if (depth > MAX_DEPTH) {
+            problems.add(Problem.error(file, line, column, "", "nested more than " + MAX_DEPTH + " levels deep"));
+            parser.skipChildren();
+            throw new Abandon();
+        }
+        switch (token) {
+            case START_OBJECT -> {
+                Map<String, YamlNode.Entry> entries = new LinkedHashMap<>();
+                for (JsonToken t = parser.nextToken(); t != JsonToken.END_OBJECT; t = parser.nextToken()) {
+                    JsonLocation keyAt = parser.currentTokenLocation();
+                    String key = parser.currentName();
+                    YamlNode value = readValue(parser, parser.nextToken(), depth + 1);
+                    YamlNode.Entry previous = entries.get(key);
+                    if (previous != null) {
+                        problems.add(Problem.error(file, keyAt.getLineNr(), keyAt.getColumnNr(), key,
+                                "duplicate key (first given at line " + previous.line() + ")"));
+                    } else {
+                        entries.put(key, new YamlNode.Entry(key, keyAt.getLineNr(), keyAt.getColumnNr(), value));
+                    }
+                }
+                return new YamlNode.Mapping(entries, line, column);
+            }
+            case START_ARRAY -> {
+                List<YamlNode> items = new ArrayList<>();
+                for (JsonToken t = parser.nextToken(); t != JsonToken.END_ARRAY; t = parser.nextToken()) {
+                    items.add(readValue(parser, t, depth + 1));
+                }
+                return new YamlNode.Sequence(items, line, column);
+            }
+            case VALUE_NULL -> {
+                return new YamlNode.Scalar("", true, line, column);
+            }
+            default -> {
+                return new YamlNode.Scalar(parser.getText(), false, line, column);
+            }
+        }
+    }
+
+    /** Unwinds the parse after a fatal structural problem that is already recorded. */
+    private static final class Abandon extends RuntimeException {
+        Abandon() {
+            super(null, null, false, false);
+        }
+    }
+
+    private Problem fromJackson(JsonProcessingException e) {
+        Throwable cause = e.getCause();
+        if (cause instanceof MarkedYAMLException marked) {
+            return fromMarked(marked);
+        }
+        JsonLocation at = e.getLocation();
+        String message = firstLine(e.getOriginalMessage());
+        if (at == null) {
+            return Problem.error(file, 0, 0, "", "not readable as YAML: " + message);
+        }
+        return Problem.error(file, Math.max(at.getLineNr(), 0), Math.max(at.getColumnNr(), 0), "",
+                "not readable as YAML: " + message);
+    }
+
+    private Problem fromMarked(MarkedYAMLException marked) {
+        var mark = marked.getProblemMark() != null ? marked.getProblemMark() : marked.getContextMark();
+        String problem = marked.getProblem() == null ? "" : marked.getProblem();
+        String context = marked.getContext() == null ? "" : " (" + marked.getContext() + ")";
+        String message = "not readable as YAML: " + firstLine(problem + context);
+        if (mark == null) {
+            return Problem.error(file, 0, 0, "", message);
+        }
+        return Problem.error(file, mark.getLine() + 1, mark.getColumn() + 1, "", message);
+    }
+
+    private Problem fromOther(Throwable e) {
+        if (e instanceof MarkedYAMLException marked) {
+            return fromMarked(marked);
+        }
+        if (e instanceof StackOverflowError) {
+            return Problem.error(file, 0, 0, "", "nested too deeply to read");
+        }
+        String message = e.getMessage() == null ? e.getClass().getSimpleName() : firstLine(e.getMessage());
+        return Problem.error(file, 0, 0, "", "not readable as YAML: " + message);
+    }
+
+    private static String firstLine(String text) {
+        if (text == null) {
+            return "unknown error";
+        }
+        String s = text.strip();
+        int nl = s.indexOf('\n');
+        return nl < 0 ? s : s.substring(0, nl).strip();
+    }
+
+    private void fileProblem(String message) {
+        problems.add(Problem.error(file, 0, 0, "", message));
+    }
+}

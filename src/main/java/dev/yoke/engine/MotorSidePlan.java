@@ -1,0 +1,413 @@
+package dev.yoke.engine;
+
+import dev.yoke.model.Bench;
+import dev.yoke.model.Modulation;
+import dev.yoke.model.Motor;
+import dev.yoke.model.Profile;
+import dev.yoke.physics.ConductionPattern;
+import dev.yoke.physics.Copper;
+import dev.yoke.physics.DcMotor;
+import dev.yoke.physics.PwmRipple;
+import dev.yoke.physics.RippleWaveform;
+import dev.yoke.physics.WindingThermalNetwork;
+import dev.yoke.physics.WindingThermalResponse;
+import java.util.List;
+
+/**
+ * One motor at one PWM frequency and gear ratio, evaluated over every profile piece with no switch in
+ * sight: currents, voltages, duties, ripple, RMS current, winding temperatures, and per piece and switch
+ * position the coefficients that turn a switch's constants into its loss with a few multiply-adds.
+ * Immutable once built.
+ */
+final class MotorSidePlan implements PairingEvaluator.MotorSide {
+
+    /** Passes of the copper-loss ↔ winding-temperature coupling (the ripple's weak dependence on R). */
+    static final int THERMAL_PASSES = 6;
+    /** Passes stop when no piece's mean winding temperature moves more than this, K. */
+    static final double THERMAL_TOLERANCE = 1e-7;
+    /** Audible limit of PWM ripple, Hz (common practice: the upper limit of human hearing). */
+    static final double AUDIBLE_LIMIT = 20e3;
+    /** L/R shorter than this many output periods reads as a rough current (common practice: "a few"). */
+    static final double ROUGH_PERIODS = 3.0;
+
+    final int motorIndex;
+    final int frequencyIndex;
+    final int ratioIndex;
+    final Motor motor;
+    final double frequency;
+    final double ratio;
+    final double cycleTime;
+    final ProfilePiece[] pieces;
+    final int n;
+
+    final double[] weight;
+    final double[] motorSpeedStart;
+    final double[] motorSpeedEnd;
+    final double[] motorTorque;
+    final double[] current;
+    final double[] absCurrent;
+    final double[] meanSquare;
+    final double[] peak;
+    final double[] ripple;
+    final double[] worstVoltage;
+    final double[] worstDuty;
+    final double[] neededVoltage;
+    final double[] resistance;
+    final double[] windingMeanTemp;
+    final double[] windingPeakTemp;
+    final double[] copperLoss;
+    final double[] frictionLoss;
+    final double[] brushLoss;
+    final double[] terminalPower;
+    final double[] mechanicalPower;
+    final double[] switchingCount;
+
+    /** Per piece k and position p at k·4 + p: on-fraction × I_rms² (A²). */
+    final double[] conduction;
+    /** Per piece and position: fraction of the piece the position hard-switches. */
+    final double[] hard;
+    /** Per piece and position: hard fraction × |I| (A). */
+    final double[] hardCurrent;
+    /** Per piece and position: freewheeling fraction × |I| (A). */
+    final double[] freeCurrent;
+    /** Positions whose coefficients differ, and how many positions each stands for. */
+    final int[] distinct;
+    final int[] multiplicity;
+
+    final double availableVoltage;
+    final double currentRms;
+    final double currentPeak;
+    final double dutyMax;
+    final double rippleMax;
+    final double switchRmsCurrent;
+    final double terminalPowerAverage;
+    final double motorLossAverage;
+    final double gateSwitchesAverage;
+    final double energyOut;
+    final double windingTempMax;
+    final boolean windingRunaway;
+    final double marginWinding;
+    final double marginMotorPeak;
+    final double marginSpeed;
+    final double marginRipple;
+    final double marginDuty;
+    final int advisoryBits;
+
+    MotorSidePlan(int motorIndex, int frequencyIndex, int ratioIndex, Motor motor, Bench bench, Profile profile,
+            ProfilePiece[] pieces) {
+        this.motorIndex = motorIndex;
+        this.frequencyIndex = frequencyIndex;
+        this.ratioIndex = ratioIndex;
+        this.motor = motor;
+        this.frequency = bench.pwmFrequencies().get(frequencyIndex);
+        this.ratio = bench.gearRatios().get(ratioIndex);
+        this.pieces = pieces;
+        this.n = pieces.length;
+        double total = 0;
+        for (ProfilePiece p : pieces) {
+            total += p.duration();
+        }
+        this.cycleTime = total;
+        weight = new double[n];
+        motorSpeedStart = new double[n];
+        motorSpeedEnd = new double[n];
+        motorTorque = new double[n];
+        current = new double[n];
+        absCurrent = new double[n];
+        meanSquare = new double[n];
+        peak = new double[n];
+        ripple = new double[n];
+        worstVoltage = new double[n];
+        worstDuty = new double[n];
+        neededVoltage = new double[n];
+        resistance = new double[n];
+        windingMeanTemp = new double[n];
+        windingPeakTemp = new double[n];
+        copperLoss = new double[n];
+        frictionLoss = new double[n];
+        brushLoss = new double[n];
+        terminalPower = new double[n];
+        mechanicalPower = new double[n];
+        switchingCount = new double[n];
+        conduction = new double[4 * n];
+        hard = new double[4 * n];
+        hardCurrent = new double[4 * n];
+        freeCurrent = new double[4 * n];
+
+        Modulation modulation = bench.modulation();
+        double bus = bench.busVoltage();
+        double ambient = bench.ambientTemp();
+        double kt = motor.torqueConstant();
+        double frictionTorque = motor.frictionTorque();
+        double loadInertia = profile.loadInertia();
+        double r20 = Copper.resistance20(motor.resistance(), motor.resistanceTemp());
+
+        // Mechanics: constant within a piece.
+        double[] housingLoss = new double[n];
+        double[] durations = new double[n];
+        double speedMax = 0;
+        double energy = 0;
+        for (int k = 0; k < n; k++) {
+            ProfilePiece p = pieces[k];
+            durations[k] = p.duration();
+            weight[k] = cycleTime > 0 ? p.duration() / cycleTime : 0;
+            motorSpeedStart[k] = ratio * p.speedStart();
+            motorSpeedEnd[k] = ratio * p.speedEnd();
+            double motorMean = ratio * p.meanSpeed();
+            double torque = DcMotor.shaftTorque(p.torque(), p.meanSpeed(), ratio, bench.gearEfficiency(),
+                    motor.rotorInertia(), loadInertia, ratio * p.acceleration(), frictionTorque,
+                    Math.signum(motorMean));
+            motorTorque[k] = torque;
+            current[k] = DcMotor.current(torque, kt);
+            absCurrent[k] = Math.abs(current[k]);
+            frictionLoss[k] = frictionTorque * Math.abs(motorMean);
+            brushLoss[k] = motor.brushDrop() * absCurrent[k];
+            housingLoss[k] = frictionLoss[k] + brushLoss[k];
+            mechanicalPower[k] = p.torque() * p.meanSpeed();
+            energy += mechanicalPower[k] * p.duration();
+            speedMax = Math.max(speedMax, Math.max(Math.abs(motorSpeedStart[k]), Math.abs(motorSpeedEnd[k])));
+        }
+        energyOut = energy;
+
+        // Copper loss ↔ winding temperature: the loss is exactly linear in temperature (IEC 60028) and the
+        // network solves that coupling in closed form; only the ripple's dependence on R needs passes.
+        WindingThermalNetwork network = new WindingThermalNetwork(motor.rthWindingHousing(),
+                motor.rthHousingAmbient(), motor.windingHeatCapacity(), motor.housingHeatCapacity());
+        double[] lossAtAmbient = new double[n];
+        double[] lossSlope = new double[n];
+        for (int k = 0; k < n; k++) {
+            windingMeanTemp[k] = ambient;
+        }
+        WindingThermalResponse response = null;
+        for (int pass = 0; pass < THERMAL_PASSES; pass++) {
+            for (int k = 0; k < n; k++) {
+                double r = Copper.resistanceAt(motor.resistance(), motor.resistanceTemp(), windingMeanTemp[k]);
+                double ms = current[k] * current[k] + rippleVariance(modulation, bus, r, k, kt, motor);
+                lossAtAmbient[k] = ms * r20 * (1 + Copper.ALPHA_20 * (ambient - Copper.REFERENCE_TEMP));
+                lossSlope[k] = ms * r20 * Copper.ALPHA_20;
+            }
+            response = network.respond(durations, lossAtAmbient, lossSlope, housingLoss, profile.repeat());
+            double[] mean = response.meanRise();
+            double moved = 0;
+            for (int k = 0; k < n; k++) {
+                double t = ambient + mean[k];
+                moved = Math.max(moved, Math.abs(t - windingMeanTemp[k]));
+                windingMeanTemp[k] = t;
+            }
+            if (moved < THERMAL_TOLERANCE) {
+                break;
+            }
+        }
+        windingRunaway = response != null && response.runaway();
+        double[] peakRise = response == null ? new double[n] : response.peakRise();
+
+        // Electrical side at the final winding temperatures.
+        double vMin = bench.busVoltageMin();
+        availableVoltage = ConductionPattern.maxVoltageRatio(modulation, bench.maxDuty()) * vMin;
+        double outputFrequency = frequency / ConductionPattern.of(modulation, 0.5, 1.0).ripplePeriodFactor();
+        double sumSquare = 0;
+        double peakMax = 0;
+        double duty = 0;
+        double rippleWorst = 0;
+        double powerSum = 0;
+        double motorLossSum = 0;
+        double gateSum = 0;
+        double windingMax = 0;
+        double resistanceMax = 0;
+        boolean discontinuous = false;
+        for (int k = 0; k < n; k++) {
+            double r = Copper.resistanceAt(motor.resistance(), motor.resistanceTemp(), windingMeanTemp[k]);
+            resistance[k] = r;
+            resistanceMax = Math.max(resistanceMax, r);
+            double i = current[k];
+            double v0 = DcMotor.terminalVoltage(i, r, kt, motorSpeedStart[k], motor.brushDrop());
+            double v1 = DcMotor.terminalVoltage(i, r, kt, motorSpeedEnd[k], motor.brushDrop());
+            double vMean = (v0 + v1) / 2;
+            double vWorst = Math.abs(v1) >= Math.abs(v0) ? v1 : v0;
+            worstVoltage[k] = vWorst;
+            neededVoltage[k] = Math.abs(vWorst);
+            ConductionPattern atWorst = ConductionPattern.of(modulation, vWorst / bus, i);
+            worstDuty[k] = atWorst.duty();
+            duty = Math.max(duty, Math.max(atWorst.highSideDuty(),
+                    ConductionPattern.of(modulation, (vWorst == v1 ? v0 : v1) / bus, i).highSideDuty()));
+
+            double variance = rippleVariance(modulation, bus, r, k, kt, motor);
+            double ms = i * i + variance;
+            meanSquare[k] = ms;
+            sumSquare += weight[k] * ms;
+
+            // Worst ripple over the ramp: the ripple peaks at an on-fraction of ½ and falls either side.
+            double d0 = ConductionPattern.of(modulation, v0 / bus, i).rippleOnFraction();
+            double d1 = ConductionPattern.of(modulation, v1 / bus, i).rippleOnFraction();
+            double lo = Math.min(d0, d1);
+            double hi = Math.max(d0, d1);
+            if (modulation != Modulation.BIPOLAR && v0 * v1 < 0) {
+                lo = 0;
+            }
+            double dStar = Math.max(lo, Math.min(hi, 0.5));
+            RippleWaveform w0 = waveform(modulation, bus, r, d0);
+            RippleWaveform w1 = waveform(modulation, bus, r, d1);
+            RippleWaveform ws = waveform(modulation, bus, r, dStar);
+            ripple[k] = Math.max(ws.peakToPeak(), Math.max(w0.peakToPeak(), w1.peakToPeak()));
+            peak[k] = Math.max(ws.peak(i), Math.max(w0.peak(i), w1.peak(i)));
+            rippleWorst = Math.max(rippleWorst, ripple[k]);
+            peakMax = Math.max(peakMax, peak[k]);
+            discontinuous |= ws.crossesZero(i) || w0.crossesZero(i) || w1.crossesZero(i);
+
+            copperLoss[k] = ms * r;
+            terminalPower[k] = i * vMean + variance * r;
+            powerSum += weight[k] * terminalPower[k];
+            motorLossSum += weight[k] * (copperLoss[k] + frictionLoss[k] + brushLoss[k]);
+            windingPeakTemp[k] = ambient + peakRise[k];
+            windingMax = Math.max(windingMax, peakRise[k]);
+
+            // Conduction pattern averaged over the piece; the voltage's sign may change once within it.
+            int base = 4 * k;
+            if (v0 * v1 < 0) {
+                double z = v0 / (v0 - v1);
+                addPattern(ConductionPattern.of(modulation, v0 / 2 / bus, i), z, ms, base, k);
+                addPattern(ConductionPattern.of(modulation, v1 / 2 / bus, i), 1 - z, ms, base, k);
+            } else {
+                addPattern(ConductionPattern.of(modulation, vMean / bus, i), 1.0, ms, base, k);
+            }
+            gateSum += weight[k] * switchingCount[k];
+        }
+        currentRms = Math.sqrt(sumSquare);
+        currentPeak = peakMax;
+        dutyMax = duty;
+        rippleMax = rippleWorst;
+        terminalPowerAverage = powerSum;
+        motorLossAverage = motorLossSum;
+        gateSwitchesAverage = gateSum;
+
+        double windingLimit = motor.maxWindingTemp() - bench.limits().windingTempMargin();
+        double hottest = ambient + windingMax;
+        double margin = Margins.of(windingLimit, hottest);
+        if (windingRunaway && margin > -1) {
+            margin = -1;
+            hottest = Margins.valueAtMargin(windingLimit, -1);
+        }
+        windingTempMax = hottest;
+        marginWinding = margin;
+        marginMotorPeak = Margins.of(motor.peakCurrent(), currentPeak);
+        marginSpeed = Margins.of(motor.maxSpeed(), speedMax);
+        marginRipple = Margins.of(bench.limits().rippleFraction() * motor.continuousCurrent(), rippleMax);
+        marginDuty = Margins.of(bench.maxDuty(), dutyMax);
+
+        // Switch RMS current: the worst position's channel current over the cycle.
+        double switchSquare = 0;
+        for (int p = 0; p < 4; p++) {
+            double s = 0;
+            for (int k = 0; k < n; k++) {
+                s += weight[k] * conduction[4 * k + p];
+            }
+            switchSquare = Math.max(switchSquare, s);
+        }
+        switchRmsCurrent = Math.sqrt(switchSquare);
+
+        int bits = 0;
+        if (outputFrequency < AUDIBLE_LIMIT) {
+            bits |= dev.yoke.engine.Advisory.AUDIBLE_PWM.bit();
+        }
+        if (resistanceMax > 0 && motor.inductance() / resistanceMax < ROUGH_PERIODS / outputFrequency) {
+            bits |= dev.yoke.engine.Advisory.ROUGH_CURRENT.bit();
+        }
+        if (discontinuous) {
+            bits |= dev.yoke.engine.Advisory.DISCONTINUOUS_CURRENT.bit();
+        }
+        if (windingRunaway) {
+            bits |= dev.yoke.engine.Advisory.WINDING_RUNAWAY.bit();
+        }
+        advisoryBits = bits;
+
+        // Positions with identical coefficients (bipolar and unipolar pair HA with LB, LA with HB).
+        int[] rep = new int[4];
+        int[] mult = new int[4];
+        int count = 0;
+        for (int p = 0; p < 4; p++) {
+            int found = -1;
+            for (int j = 0; j < count && found < 0; j++) {
+                if (samePosition(rep[j], p)) {
+                    found = j;
+                }
+            }
+            if (found >= 0) {
+                mult[found]++;
+            } else {
+                rep[count] = p;
+                mult[count] = 1;
+                count++;
+            }
+        }
+        distinct = java.util.Arrays.copyOf(rep, count);
+        multiplicity = java.util.Arrays.copyOf(mult, count);
+    }
+
+    private boolean samePosition(int a, int b) {
+        for (int k = 0; k < n; k++) {
+            if (!close(conduction[4 * k + a], conduction[4 * k + b]) || !close(hard[4 * k + a], hard[4 * k + b])
+                    || !close(hardCurrent[4 * k + a], hardCurrent[4 * k + b])
+                    || !close(freeCurrent[4 * k + a], freeCurrent[4 * k + b])) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    private static boolean close(double x, double y) {
+        return Math.abs(x - y) <= 1e-13 * Math.max(Math.abs(x), Math.abs(y));
+    }
+
+    private void addPattern(ConductionPattern pattern, double share, double ms, int base, int k) {
+        double absI = absCurrent[k];
+        for (int p = 0; p < 4; p++) {
+            conduction[base + p] += share * pattern.onFraction(p) * ms;
+            hard[base + p] += share * pattern.hardSwitching(p);
+            hardCurrent[base + p] += share * pattern.hardSwitching(p) * absI;
+            freeCurrent[base + p] += share * pattern.freewheeling(p) * absI;
+        }
+        switchingCount[k] += share * pattern.switchingCount();
+    }
+
+    private RippleWaveform waveform(Modulation modulation, double bus, double r, double onFraction) {
+        ConductionPattern shape = ConductionPattern.of(modulation, 0.5, 1.0);
+        return PwmRipple.waveform(shape.rippleSwing() * bus, r, motor.inductance(), onFraction,
+                shape.ripplePeriodFactor() / frequency);
+    }
+
+    /** Ripple variance averaged over the piece's voltage ramp (Simpson's rule on start, middle and end). */
+    private double rippleVariance(Modulation modulation, double bus, double r, int k, double kt, Motor m) {
+        double i = current[k];
+        double v0 = DcMotor.terminalVoltage(i, r, kt, motorSpeedStart[k], m.brushDrop());
+        double v1 = DcMotor.terminalVoltage(i, r, kt, motorSpeedEnd[k], m.brushDrop());
+        double vm = (v0 + v1) / 2;
+        double a = waveform(modulation, bus, r, ConductionPattern.of(modulation, v0 / bus, i).rippleOnFraction())
+                .variance();
+        double b = waveform(modulation, bus, r, ConductionPattern.of(modulation, vm / bus, i).rippleOnFraction())
+                .variance();
+        double c = waveform(modulation, bus, r, ConductionPattern.of(modulation, v1 / bus, i).rippleOnFraction())
+                .variance();
+        return (a + 4 * b + c) / 6;
+    }
+
+    @Override
+    public int motorIndex() {
+        return motorIndex;
+    }
+
+    @Override
+    public int frequencyIndex() {
+        return frequencyIndex;
+    }
+
+    @Override
+    public int ratioIndex() {
+        return ratioIndex;
+    }
+
+    static MotorSidePlan build(int motorIndex, int frequencyIndex, int ratioIndex, Motor motor, Bench bench,
+            Profile profile, List<ProfilePiece> pieces) {
+        return new MotorSidePlan(motorIndex, frequencyIndex, ratioIndex, motor, bench, profile,
+                pieces.toArray(new ProfilePiece[0]));
+    }
+}

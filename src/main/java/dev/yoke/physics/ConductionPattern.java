@@ -1,0 +1,144 @@
+package dev.yoke.physics;
+
+import dev.yoke.model.Modulation;
+
+/**
+ * Which of the four switches conducts, and which switches hard, for one modulation, one average
+ * output voltage and one current direction (any power-electronics text, e.g. Mohan, Undeland &amp;
+ * Robbins, <i>Power Electronics</i>, ch. 7, full-bridge dc-dc converter).
+ *
+ * <p>Positions are {@link #HIGH_A}, {@link #LOW_A}, {@link #HIGH_B}, {@link #LOW_B}; the motor current
+ * I is positive from leg A to leg B. Both switches of a switching leg are driven in complement with
+ * a dead time (synchronous rectification). A leg sourcing current (out of its midpoint) hard-switches
+ * its high switch and freewheels through its low switch's body diode during the dead times; a leg
+ * sinking current does the reverse. Every regenerating quadrant follows from the sign of the leg current.
+ *
+ * <ul>
+ * <li>Bipolar: leg A high-side duty d = (1 + V/V_bus)/2, leg B 1 − d; output ±V_bus at f.</li>
+ * <li>Unipolar: leg A (1 + V/V_bus)/2, leg B (1 − V/V_bus)/2, carriers 180° apart; output 0 or ±V_bus at 2f.</li>
+ * <li>Sign-magnitude: the leg on the side of the voltage's sign switches at m = |V|/V_bus; the other leg
+ * holds its low switch on.</li>
+ * </ul>
+ *
+ * @param onFraction      fraction of the period each position's channel is on
+ * @param hardSwitching   1 where the position makes the hard turn-on and turn-off of its leg, else 0
+ * @param freewheeling    1 where the position's body diode carries the dead times of its leg, else 0
+ * @param switchingCount  number of switches driven at the PWM frequency (gate-drive loss)
+ * @param rippleSwing     ΔV of the output as a multiple of V_bus
+ * @param rippleOnFraction δ of the output waveform
+ * @param ripplePeriodFactor output period as a multiple of 1/f (0.5 for unipolar)
+ * @param duty            duty as reported: bipolar d, unipolar and sign-magnitude m = |V|/V_bus
+ * @param highSideDuty    largest on-fraction of a high switch (what a bootstrap supply limits)
+ */
+public record ConductionPattern(
+        double[] onFraction,
+        double[] hardSwitching,
+        double[] freewheeling,
+        int switchingCount,
+        double rippleSwing,
+        double rippleOnFraction,
+        double ripplePeriodFactor,
+        double duty,
+        double highSideDuty) {
+
+    public static final int HIGH_A = 0;
+    public static final int LOW_A = 1;
+    public static final int HIGH_B = 2;
+    public static final int LOW_B = 3;
+    public static final int POSITIONS = 4;
+
+    /** Names of the positions, in index order. */
+    public static final String[] POSITION_NAMES = {"HA", "LA", "HB", "LB"};
+
+    public ConductionPattern {
+        onFraction = onFraction.clone();
+        hardSwitching = hardSwitching.clone();
+        freewheeling = freewheeling.clone();
+    }
+
+    @Override
+    public double[] onFraction() {
+        return onFraction.clone();
+    }
+
+    @Override
+    public double[] hardSwitching() {
+        return hardSwitching.clone();
+    }
+
+    @Override
+    public double[] freewheeling() {
+        return freewheeling.clone();
+    }
+
+    /** On-fraction of one position. */
+    public double onFraction(int position) {
+        return onFraction[position];
+    }
+
+    /** 1 when the position hard-switches, else 0. */
+    public double hardSwitching(int position) {
+        return hardSwitching[position];
+    }
+
+    /** 1 when the position's body diode carries the dead times, else 0. */
+    public double freewheeling(int position) {
+        return freewheeling[position];
+    }
+
+    /**
+     * The pattern for a modulation.
+     *
+     * @param modulation  switching scheme
+     * @param voltageRatio V/V_bus, clamped to [−1, 1]
+     * @param current     motor current, A (only its sign matters)
+     */
+    public static ConductionPattern of(Modulation modulation, double voltageRatio, double current) {
+        double v = Math.max(-1.0, Math.min(1.0, voltageRatio));
+        double m = Math.abs(v);
+        double[] on = new double[POSITIONS];
+        double[] hard = new double[POSITIONS];
+        double[] free = new double[POSITIONS];
+        switch (modulation) {
+            case BIPOLAR: {
+                double d = (1 + v) / 2;
+                leg(on, hard, free, HIGH_A, d, true, current);
+                leg(on, hard, free, HIGH_B, 1 - d, true, -current);
+                return new ConductionPattern(on, hard, free, 4, 2.0, d, 1.0, d, Math.max(d, 1 - d));
+            }
+            case UNIPOLAR: {
+                double dA = (1 + v) / 2;
+                double dB = (1 - v) / 2;
+                leg(on, hard, free, HIGH_A, dA, true, current);
+                leg(on, hard, free, HIGH_B, dB, true, -current);
+                return new ConductionPattern(on, hard, free, 4, 1.0, m, 0.5, m, Math.max(dA, dB));
+            }
+            case SIGN_MAGNITUDE: {
+                boolean legASwitches = v >= 0;
+                leg(on, hard, free, HIGH_A, legASwitches ? m : 0, legASwitches, current);
+                leg(on, hard, free, HIGH_B, legASwitches ? 0 : m, !legASwitches, -current);
+                return new ConductionPattern(on, hard, free, 2, 1.0, m, 1.0, m, m);
+            }
+            default:
+                throw new IllegalArgumentException("unknown modulation " + modulation);
+        }
+    }
+
+    /** One leg: high-side duty, whether it switches, and the current leaving its midpoint. */
+    private static void leg(double[] on, double[] hard, double[] free, int high, double highDuty,
+            boolean switching, double legCurrent) {
+        int low = high + 1;
+        on[high] = highDuty;
+        on[low] = 1 - highDuty;
+        if (switching) {
+            boolean sourcing = legCurrent >= 0;
+            hard[sourcing ? high : low] = 1;
+            free[sourcing ? low : high] = 1;
+        }
+    }
+
+    /** Largest |V|/V_bus the scheme can make when no high switch may exceed {@code maxDuty}. */
+    public static double maxVoltageRatio(Modulation modulation, double maxDuty) {
+        return modulation == Modulation.SIGN_MAGNITUDE ? maxDuty : 2 * maxDuty - 1;
+    }
+}

@@ -1,0 +1,43 @@
+package dev.yoke.physics;
+
+/**
+ * Loss mechanisms of a MOSFET in a hard-switched leg, as averages in watts at switching frequency f
+ * (Mohan, Undeland &amp; Robbins, <i>Power Electronics</i>, 3rd ed., §2-7, eq. 2-6 for the linear V·I
+ * overlap; Erickson &amp; Maksimović, ch. 4, for capacitive and recovery loss; gate charge for drive loss).
+ */
+public final class SwitchLossLaws {
+
+    private SwitchLossLaws() {
+    }
+
+    /** Channel conduction: on-fraction × I_rms² × R_DS(on), W. */
+    public static double conduction(double onFraction, double meanSquareCurrent, double onResistance) {
+        return onFraction * meanSquareCurrent * onResistance;
+    }
+
+    /** Linear V·I overlap of one hard turn-on and one hard turn-off per period: ½·V·I·(t_on + t_off)·f, W. */
+    public static double hardSwitching(double voltage, double current, double turnOnTime, double turnOffTime,
+            double frequency) {
+        return 0.5 * voltage * Math.abs(current) * (turnOnTime + turnOffTime) * frequency;
+    }
+
+    /** Output capacitance discharged in the channel at each hard turn-on: ½·C_oss·V²·f, W. */
+    public static double outputCapacitance(double capacitance, double voltage, double frequency) {
+        return 0.5 * capacitance * voltage * voltage * frequency;
+    }
+
+    /** Reverse recovery of the opposite body diode at each hard turn-on: Q_rr·V·f, W. */
+    public static double reverseRecovery(double recoveryCharge, double voltage, double frequency) {
+        return recoveryCharge * voltage * frequency;
+    }
+
+    /** Body diode carrying the current through both dead times of a period: V_f·|I|·2·t_dead·f, W. */
+    public static double deadTimeDiode(double forwardVoltage, double current, double deadTime, double frequency) {
+        return forwardVoltage * Math.abs(current) * 2 * deadTime * frequency;
+    }
+
+    /** Gate drive of one switch: Q_g·V_drive·f, W (dissipated in the driver and gate resistors). */
+    public static double gateDrive(double gateCharge, double driveVoltage, double frequency) {
+        return gateCharge * driveVoltage * frequency;
+    }
+}

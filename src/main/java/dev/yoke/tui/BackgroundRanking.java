@@ -1,0 +1,117 @@
+package dev.yoke.tui;
+
+import dev.yoke.model.Catalog;
+import dev.yoke.model.Scenario;
+import java.util.concurrent.atomic.AtomicBoolean;
+import java.util.concurrent.atomic.AtomicLong;
+import java.util.concurrent.atomic.AtomicReference;
+
+/**
+ * One ranking running on its own daemon thread. The user-interface thread polls it and, when it
+ * is done, takes the finished table: nothing is shared while it runs but these atomics.
+ */
+public final class BackgroundRanking {
+
+    /** Where a run stands. */
+    public enum State { RUNNING, DONE, CANCELLED, FAILED }
+
+    private final AtomicLong done = new AtomicLong();
+    private final AtomicLong total = new AtomicLong();
+    private final AtomicBoolean cancelled = new AtomicBoolean();
+    private final AtomicReference<State> state = new AtomicReference<>(State.RUNNING);
+    private final AtomicReference<PairingTable> result = new AtomicReference<>();
+    private final AtomicReference<String> failure = new AtomicReference<>();
+    private final long startNanos = System.nanoTime();
+    private volatile long endNanos;
+    private final Thread thread;
+
+    private BackgroundRanking(WorkbenchBackend backend, Scenario scenario, Catalog catalog) {
+        RankProgress progress = new RankProgress() {
+            @Override
+            public void report(long d, long t) {
+                done.set(d);
+                total.set(t);
+            }
+
+            @Override
+            public boolean isCancelled() {
+                return cancelled.get() || Thread.currentThread().isInterrupted();
+            }
+        };
+        thread = new Thread(() -> {
+            try {
+                PairingTable table = backend.rank(scenario, catalog, progress);
+                if (cancelled.get()) {
+                    state.set(State.CANCELLED);
+                } else {
+                    result.set(table);
+                    state.set(State.DONE);
+                }
+            } catch (InterruptedException e) {
+                state.set(State.CANCELLED);
+            } catch (Exception | StackOverflowError e) {
+                if (cancelled.get()) {
+                    state.set(State.CANCELLED);
+                } else {
+                    failure.set(e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage());
+                    state.set(State.FAILED);
+                }
+            } finally {
+                endNanos = System.nanoTime();
+            }
+        }, "yoke-ranking");
+        thread.setDaemon(true);
+    }
+
+    /** Starts ranking on a new background thread. */
+    public static BackgroundRanking start(WorkbenchBackend backend, Scenario scenario, Catalog catalog) {
+        BackgroundRanking run = new BackgroundRanking(backend, scenario, catalog);
+        run.thread.start();
+        return run;
+    }
+
+    public State state() {
+        return state.get();
+    }
+
+    /** Asks the run to stop; it finishes as {@link State#CANCELLED} shortly after. */
+    public void cancel() {
+        cancelled.set(true);
+        thread.interrupt();
+    }
+
+    /** Fraction done in [0, 1], or NaN while the total is not known. */
+    public double fraction() {
+        long t = total.get();
+        return t <= 0 ? Double.NaN : Math.min(1.0, (double) done.get() / t);
+    }
+
+    public long done() {
+        return done.get();
+    }
+
+    public long total() {
+        return total.get();
+    }
+
+    /** Seconds since the start (or the run's length once finished). */
+    public double seconds() {
+        long end = endNanos == 0 ? System.nanoTime() : endNanos;
+        return (end - startNanos) / 1e9;
+    }
+
+    /** The finished table; null unless {@link State#DONE}. */
+    public PairingTable result() {
+        return result.get();
+    }
+
+    /** Why the run failed; null unless {@link State#FAILED}. */
+    public String failure() {
+        return failure.get();
+    }
+
+    /** Waits for the run to end (tests and the batch path). */
+    public void await(long millis) throws InterruptedException {
+        thread.join(millis);
+    }
+}

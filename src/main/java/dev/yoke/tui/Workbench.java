@@ -1,0 +1,492 @@
+package dev.yoke.tui;
+
+import com.googlecode.lanterna.gui2.BasicWindow;
+import com.googlecode.lanterna.gui2.BorderLayout;
+import com.googlecode.lanterna.gui2.Panel;
+import com.googlecode.lanterna.gui2.Window;
+import com.googlecode.lanterna.gui2.WindowBasedTextGUI;
+import com.googlecode.lanterna.gui2.WindowListenerAdapter;
+import com.googlecode.lanterna.input.KeyStroke;
+import com.googlecode.lanterna.input.KeyType;
+import dev.yoke.engine.Metric;
+import dev.yoke.engine.PairingResult;
+import dev.yoke.model.Catalog;
+import dev.yoke.model.Scenario;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Set;
+import java.util.concurrent.atomic.AtomicBoolean;
+import java.util.function.Function;
+
+/**
+ * The terminal workbench: the shortlist screen and the screens it opens (pairing detail, help,
+ * cautions), the prompts (find, margin threshold, export) and the background ranking.
+ *
+ * <p>Everything here runs on the user-interface thread; the ranking runs on its own thread and
+ * is only read through {@link BackgroundRanking}. The owner calls {@link #tick()} between input
+ * events to pick up progress and finished rankings.
+ */
+public final class Workbench {
+
+    private final WindowBasedTextGUI gui;
+    private final TerminalTraits traits;
+    private final WorkbenchBackend backend;
+    private final Path exportFolder;
+    private EditorHooks editors = EditorHooks.NONE;
+
+    private Scenario scenario;
+    private Catalog catalog;
+    private Set<String> suspectIds;
+    private PairingTable table = PairingTable.EMPTY;
+    private ShortlistContext context;
+    private ViewSettings view = ViewSettings.DEFAULT;
+    private ShortlistGridModel gridModel;
+    private int feasibleCount;
+
+    private BackgroundRanking ranking;
+    private String message = "";
+    private Prompt prompt;
+    private boolean finished;
+
+    private final BasicWindow shortlistWindow;
+    private final GridComponent grid;
+    private final Bar statusBar;
+    private final Bar messageBar;
+
+    /** A one-line question on the message line; {@code accept} returns an error to show, or null when done. */
+    private static final class Prompt {
+        final String label;
+        final LineEditor editor;
+        final Function<String, String> accept;
+        String error = "";
+
+        Prompt(String label, String initial, Function<String, String> accept) {
+            this.label = label;
+            this.editor = new LineEditor(initial);
+            this.accept = accept;
+        }
+    }
+
+    public Workbench(WindowBasedTextGUI gui, TerminalTraits traits, WorkbenchBackend backend,
+            Scenario scenario, Catalog catalog, Set<String> suspectIds, Path exportFolder) {
+        this.gui = gui;
+        this.traits = traits;
+        this.backend = backend;
+        this.scenario = scenario;
+        this.catalog = catalog;
+        this.suspectIds = Set.copyOf(suspectIds);
+        this.exportFolder = exportFolder;
+        this.context = new ShortlistContext(catalog, scenario, this.suspectIds);
+        this.gridModel = new ShortlistGridModel(table, context, view, new int[0], traits.glyphs());
+
+        grid = new GridComponent(gridModel, traits);
+        grid.setSelectedColumn(ShortlistGridModel.indexOf(ShortlistColumn.BINDING_MARGIN));
+        grid.setKeyHandler(this::onShortlistKey);
+        grid.setEmptyMessage("ranking...");
+        statusBar = new Bar(traits, Tone.BAR, this::statusText);
+        messageBar = new Bar(traits, Tone.NORMAL, this::messageText);
+        Bar footer = new Bar(traits, Tone.BAR, w -> " " + KeyMap.footer(KeyMap.View.SHORTLIST, w - 1));
+
+        Panel bottom = new Panel(new BorderLayout());
+        bottom.addComponent(messageBar, BorderLayout.Location.TOP);
+        bottom.addComponent(footer, BorderLayout.Location.BOTTOM);
+        Panel panel = new Panel(new BorderLayout());
+        panel.addComponent(statusBar, BorderLayout.Location.TOP);
+        panel.addComponent(grid, BorderLayout.Location.CENTER);
+        panel.addComponent(bottom, BorderLayout.Location.BOTTOM);
+
+        shortlistWindow = new BasicWindow("Shortlist");
+        shortlistWindow.setHints(List.of(Window.Hint.FULL_SCREEN, Window.Hint.NO_DECORATIONS));
+        shortlistWindow.setComponent(panel);
+        shortlistWindow.setFocusedInteractable(grid);
+        shortlistWindow.addWindowListener(new WindowListenerAdapter() {
+            @Override
+            public void onInput(Window window, KeyStroke key, AtomicBoolean deliverEvent) {
+                if (KeyMap.isInterrupt(key)) {
+                    quit();
+                    deliverEvent.set(false);
+                } else if (prompt != null) {
+                    promptKey(key);
+                    deliverEvent.set(false);
+                }
+            }
+        });
+    }
+
+    /** Shows the shortlist and starts the first ranking. */
+    public void open() {
+        gui.addWindow(shortlistWindow);
+        gui.setActiveWindow(shortlistWindow);
+        startRanking();
+    }
+
+    /** Where the edit keys go. */
+    public void setEditors(EditorHooks hooks) {
+        this.editors = hooks;
+    }
+
+    public WindowBasedTextGUI gui() {
+        return gui;
+    }
+
+    public TerminalTraits traits() {
+        return traits;
+    }
+
+    public Scenario scenario() {
+        return scenario;
+    }
+
+    public Catalog catalog() {
+        return catalog;
+    }
+
+    /** For the editors: the scenario changed; rank again. */
+    public void scenarioChanged(Scenario changed) {
+        this.scenario = changed;
+        startRanking();
+    }
+
+    /** For the editors: the catalog changed (with the ids its check finds implausible); rank again. */
+    public void catalogChanged(Catalog changed, Set<String> suspects) {
+        this.catalog = changed;
+        this.suspectIds = Set.copyOf(suspects);
+        startRanking();
+    }
+
+    /** Shows a line of text on the message line until the next message. */
+    public void showMessage(String text) {
+        message = text;
+        messageBar.invalidate();
+    }
+
+    /** True once the user asked to leave. */
+    public boolean isFinished() {
+        return finished;
+    }
+
+    public GridComponent grid() {
+        return grid;
+    }
+
+    public ShortlistGridModel gridModel() {
+        return gridModel;
+    }
+
+    public ViewSettings view() {
+        return view;
+    }
+
+    /** The running or last ranking (null before the first). */
+    public BackgroundRanking ranking() {
+        return ranking;
+    }
+
+    /** Rank again in the background; a run still going is stopped first. */
+    public void startRanking() {
+        if (ranking != null && ranking.state() == BackgroundRanking.State.RUNNING) {
+            ranking.cancel();
+        }
+        ranking = BackgroundRanking.start(backend, scenario, catalog);
+        statusBar.invalidate();
+        messageBar.invalidate();
+    }
+
+    /**
+     * Picks up the ranking's progress, or its finished table. Call between input events.
+     *
+     * @return true when something on screen changed
+     */
+    public boolean tick() {
+        if (ranking == null) {
+            return false;
+        }
+        switch (ranking.state()) {
+            case RUNNING -> {
+                messageBar.invalidate();
+                return true;
+            }
+            case DONE -> {
+                PairingTable result = ranking.result();
+                if (result != null && result != table) {
+                    table = result;
+                    context = new ShortlistContext(catalog, scenario, suspectIds);
+                    feasibleCount = countFeasible(table);
+                    applyView(view, -1);
+                    grid.setEmptyMessage("no pairing passes the filters (z clears them)");
+                    showMessage(String.format(Locale.ROOT, "ranked %d pairings in %.1f s", table.size(), ranking.seconds()));
+                    return true;
+                }
+                return false;
+            }
+            case CANCELLED, FAILED -> {
+                String text = ranking.state() == BackgroundRanking.State.CANCELLED
+                        ? "ranking stopped" + (table.size() > 0 ? "; showing the previous results" : "")
+                        : "ranking failed: " + ranking.failure();
+                if (table.size() == 0) {
+                    grid.setEmptyMessage(text + " (r ranks again)");
+                }
+                showMessage(text);
+                BackgroundRanking ended = ranking;
+                ranking = null;
+                return ended != null;
+            }
+            default -> {
+                return false;
+            }
+        }
+    }
+
+    private static int countFeasible(PairingTable t) {
+        int n = 0;
+        for (int r = 0; r < t.size(); r++) {
+            if (t.value(r, Metric.FEASIBLE) >= 0.5) {
+                n++;
+            }
+        }
+        return n;
+    }
+
+    /** Re-sorts and re-filters; keeps the cursor on the same pairing when it stays visible. */
+    private void applyView(ViewSettings newView, int keepTableRow) {
+        view = newView;
+        int[] order = ViewOrder.compute(table, context, view);
+        gridModel = new ShortlistGridModel(table, context, view, order, traits.glyphs());
+        int cursor = keepTableRow >= 0 ? gridModel.gridRowOf(keepTableRow) : -1;
+        grid.setModel(gridModel);
+        grid.setCursorRow(Math.max(0, cursor));
+        statusBar.invalidate();
+    }
+
+    private int cursorTableRow() {
+        return gridModel.rowCount() == 0 ? -1 : gridModel.tableRow(grid.getCursorRow());
+    }
+
+    private ShortlistColumn selectedColumn() {
+        return ShortlistGridModel.columnAt(grid.getSelectedColumn());
+    }
+
+    private boolean onShortlistKey(KeyStroke key) {
+        KeyMap.Action action = KeyMap.actionFor(KeyMap.View.SHORTLIST, key).orElse(null);
+        if (action == null) {
+            return false;
+        }
+        switch (action) {
+            case OPEN_DETAIL -> openDetail();
+            case SORT -> applyView(view.sortedBy(selectedColumn()), cursorTableRow());
+            case SORT_SECOND -> applyView(view.thenSortedBy(selectedColumn()), cursorTableRow());
+            case FEASIBLE_ONLY -> applyView(view.withFeasibleOnly(!view.feasibleOnly()), cursorTableRow());
+            case PARETO_ONLY -> applyView(view.withParetoOnly(!view.paretoOnly()), cursorTableRow());
+            case CLEAR_FILTERS -> applyView(view.withoutFilters(), cursorTableRow());
+            case FIND -> ask("find in part ids and labels: ", view.text(), text -> {
+                applyView(view.withText(text), cursorTableRow());
+                return null;
+            });
+            case THRESHOLD -> askThreshold();
+            case EXPORT -> askExport();
+            case RERANK -> startRanking();
+            case CANCEL_RANKING -> {
+                if (ranking != null && ranking.state() == BackgroundRanking.State.RUNNING) {
+                    ranking.cancel();
+                    showMessage("stopping the ranking...");
+                }
+            }
+            case EDIT_PARTS -> editors.openParts(this);
+            case EDIT_BENCH -> editors.openBench(this);
+            case HELP -> openHelp();
+            case CAUTIONS -> openCautions();
+            case QUIT -> quit();
+            default -> {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    private void quit() {
+        finished = true;
+        if (ranking != null) {
+            ranking.cancel();
+        }
+    }
+
+    private void ask(String label, String initial, Function<String, String> accept) {
+        prompt = new Prompt(label, initial, accept);
+        messageBar.invalidate();
+    }
+
+    private void promptKey(KeyStroke key) {
+        Prompt p = prompt;
+        if (key.getKeyType() == KeyType.Escape) {
+            prompt = null;
+            showMessage("");
+        } else if (key.getKeyType() == KeyType.Enter) {
+            String error = p.accept.apply(p.editor.text());
+            if (error == null) {
+                if (prompt == p) {
+                    prompt = null;
+                }
+            } else {
+                p.error = error;
+            }
+        } else {
+            p.editor.edit(key);
+        }
+        messageBar.invalidate();
+        statusBar.invalidate();
+    }
+
+    private void askThreshold() {
+        ShortlistColumn column = selectedColumn().isMargin() ? selectedColumn() : ShortlistColumn.BINDING_MARGIN;
+        Double current = view.thresholds().get(column);
+        String initial = current == null ? "" : Cells.fixed(current * 100, 1);
+        ask("keep " + column.title() + " >= (percent, empty removes): ", initial, text -> {
+            String t = text.strip();
+            if (t.endsWith("%")) {
+                t = t.substring(0, t.length() - 1).strip();
+            }
+            if (t.isEmpty()) {
+                applyView(view.withThreshold(column, Double.NaN), cursorTableRow());
+                return null;
+            }
+            try {
+                double percent = Double.parseDouble(t);
+                applyView(view.withThreshold(column, percent / 100.0), cursorTableRow());
+                return null;
+            } catch (NumberFormatException e) {
+                return "expected a percentage such as 5 or -10, got '" + text + "'";
+            }
+        });
+    }
+
+    private void askExport() {
+        if (gridModel.rowCount() == 0) {
+            showMessage("nothing to export: no rows shown");
+            return;
+        }
+        Path[] confirmed = new Path[1];
+        ask("export to CSV file: ", ExportTarget.DEFAULT_NAME, text -> {
+            Path file;
+            try {
+                file = ExportTarget.resolve(exportFolder, text);
+            } catch (IllegalArgumentException e) {
+                return e.getMessage();
+            }
+            if (Files.exists(file) && !file.equals(confirmed[0])) {
+                confirmed[0] = file;
+                return file.getFileName() + " exists: Enter again replaces it, Esc keeps it";
+            }
+            try {
+                backend.writeCsv(file, table, context, gridModel.order());
+            } catch (Exception e) {
+                return "could not write " + file.getFileName() + ": " + e.getMessage();
+            }
+            showMessage("wrote " + gridModel.rowCount() + " rows to " + file);
+            return null;
+        });
+    }
+
+    private void openDetail() {
+        int row = cursorTableRow();
+        if (row < 0) {
+            return;
+        }
+        PairingResult result;
+        try {
+            result = backend.explain(scenario, catalog, table.motorIndex(row), table.switchIndex(row),
+                    table.frequencyIndex(row), table.ratioIndex(row));
+        } catch (RuntimeException e) {
+            showMessage("could not explain this pairing: " + e.getMessage());
+            return;
+        }
+        Scenario shown = scenario;
+        String title = "Pairing detail: " + result.motor().id() + " with " + result.powerSwitch().id()
+                + " at " + Cells.engineering(result.pwmFrequency(), "Hz") + ", gear " + Cells.number(result.gearRatio());
+        openPage(title, w -> DetailReport.lines(result, shown, traits, w), KeyMap.View.DETAIL);
+    }
+
+    private void openHelp() {
+        openPage("Help: keys", w -> helpLines(), KeyMap.View.PAGE);
+    }
+
+    private void openCautions() {
+        openPage("Cautions", Cautions::lines, KeyMap.View.PAGE);
+    }
+
+    private List<Line> helpLines() {
+        Glyphs g = traits.glyphs();
+        List<Line> lines = new ArrayList<>();
+        for (String s : KeyMap.helpLines()) {
+            boolean heading = !s.isEmpty() && !s.startsWith(" ");
+            lines.add(heading ? Line.of(Tone.HEADING, s) : Line.of(s));
+        }
+        lines.add(Line.blank());
+        lines.add(Line.of(Tone.HEADING, "Marks"));
+        lines.add(Line.of("  " + g.paretoMark() + "        on the Pareto front: no other pairing is at least as good on every objective"));
+        lines.add(Line.of("  " + g.suspectMark() + "id      a part the catalog check found implausible"));
+        lines.add(Line.of("  ok FAIL  verdict: FAIL when any margin is negative"));
+        lines.add(Line.of("  " + g.descending() + " " + g.ascending() + " " + g.descending() + "2      sort direction on a heading; 2 marks the second key"));
+        lines.add(Line.of("  m:...    margin columns, (limit - value) / limit: negative fails"));
+        lines.add(Line.blank());
+        lines.add(Line.of(Tone.WARN, "Results are estimates for shortlisting; press c for the safety cautions."));
+        return lines;
+    }
+
+    private void openPage(String title, java.util.function.IntFunction<List<Line>> layout, KeyMap.View pageView) {
+        PageWindow window = new PageWindow(title, layout, pageView, traits);
+        window.page().setKeyHandler(key -> {
+            if (KeyMap.isInterrupt(key)) {
+                quit();
+                return true;
+            }
+            KeyMap.Action action = KeyMap.actionFor(pageView, key).orElse(null);
+            if (action == null) {
+                return false;
+            }
+            switch (action) {
+                case BACK, PAGE_BACK -> window.close();
+                case HELP -> openHelp();
+                case CAUTIONS -> openCautions();
+                default -> {
+                    return false;
+                }
+            }
+            return true;
+        });
+        gui.addWindow(window);
+        gui.setActiveWindow(window);
+    }
+
+    private String statusText(int width) {
+        String counts = table.size() == 0 && ranking != null && ranking.state() == BackgroundRanking.State.RUNNING
+                ? "ranking"
+                : String.format(Locale.ROOT, "%d shown / %d total / %d feasible", gridModel.rowCount(), table.size(), feasibleCount);
+        String filters = view.describeFilters();
+        String text = " " + scenario.name() + " | " + counts + " | sort " + view.describeSort()
+                + (filters.isEmpty() ? "" : " | only " + filters);
+        return text;
+    }
+
+    private String messageText(int width) {
+        Prompt p = prompt;
+        if (p != null) {
+            String field = p.editor.text();
+            int fieldWidth = Math.max(field.length() + 1, 16);
+            int from = 1 + p.label.length();
+            messageBar.setHighlightQuietly(from, from + fieldWidth, from + p.editor.caret());
+            return " " + p.label + KeyMap.pad(field, fieldWidth) + (p.error.isEmpty() ? "" : "  " + p.error);
+        }
+        messageBar.setHighlightQuietly(-1, -1, -1);
+        if (ranking != null && ranking.state() == BackgroundRanking.State.RUNNING) {
+            double f = ranking.fraction();
+            String percent = Double.isNaN(f) ? "" : String.format(Locale.ROOT, " %.0f%%", 100 * f);
+            String bar = Double.isNaN(f) ? "" : " " + DetailReport.bar(f, 20, traits.glyphs());
+            return String.format(Locale.ROOT, " ranking%s%s  %d of %d pairings, %.1f s  (Esc stops)",
+                    percent, bar, ranking.done(), ranking.total(), ranking.seconds());
+        }
+        return " " + message;
+    }
+}

@@ -1,0 +1,368 @@
+package dev.yoke.tui;
+
+import static org.junit.jupiter.api.Assertions.assertAll;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertNotEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.googlecode.lanterna.SGR;
+import com.googlecode.lanterna.input.KeyStroke;
+import com.googlecode.lanterna.input.KeyType;
+import dev.yoke.engine.Metric;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Set;
+import java.util.concurrent.CountDownLatch;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** The workbench driven through Lanterna's virtual terminal with key strokes, checking what the screen shows. */
+class WorkbenchTest {
+
+    @TempDir
+    Path dir;
+
+    private static KeyStroke key(char c) {
+        return new KeyStroke(c, false, false);
+    }
+
+    /** Moves the column choice to a shortlist column (from the default, the binding margin). */
+    private static void selectColumn(ScreenHarness h, ShortlistColumn column) throws Exception {
+        h.workbench.grid().setSelectedColumn(ShortlistGridModel.indexOf(column));
+        h.update();
+    }
+
+    private static int columnStart(String header, String title) {
+        int at = header.indexOf(title);
+        assertTrue(at >= 0, () -> "heading '" + title + "' not on screen: " + header);
+        return at;
+    }
+
+    @Test
+    void shortlistShowsStatusHeadingsRowsAndFooter() throws Exception {
+        try (ScreenHarness h = new ScreenHarness(100, 30, TerminalTraits.PLAIN, dir).ranked()) {
+            String status = h.line(0);
+            String header = h.line(1);
+            String footer = h.line(h.rows() - 1);
+            assertAll(
+                    () -> assertTrue(status.contains("test-bench"), status),
+                    () -> assertTrue(status.contains("180 shown / 180 total"), status),
+                    () -> assertTrue(header.contains("motor") && header.contains("switch") && header.contains("verdict"), header),
+                    () -> assertTrue(h.line(2).contains("mo-"), h.line(2)),
+                    () -> assertTrue(footer.contains("s sort") && footer.contains("? help") && footer.contains("q quit"), footer));
+        }
+    }
+
+    @Test
+    void sortingByCostPutsTheCheapestFirstAndAgainReverses() throws Exception {
+        try (ScreenHarness h = new ScreenHarness(100, 30, TerminalTraits.PLAIN, dir).ranked()) {
+            selectColumn(h, ShortlistColumn.COST);
+            String before = h.line(2);
+            h.press(key('s'));
+            ShortlistGridModel m = h.workbench.gridModel();
+            double first = m.table().value(m.tableRow(0), Metric.COST);
+            double last = m.table().value(m.tableRow(m.rowCount() - 1), Metric.COST);
+            String header = h.line(1);
+            int costAt = columnStart(header, "cost");
+            String firstCell = h.line(2).substring(costAt, Math.min(100, costAt + 8)).strip();
+            assertAll(
+                    () -> assertTrue(first <= last, "ascending"),
+                    () -> assertEquals(Cells.fixed(first, 2), firstCell, "the screen's first row shows the smallest cost"),
+                    () -> assertTrue(header.contains("cost ^"), header),
+                    () -> assertNotEquals(before, h.line(2), "the first row changed"));
+            h.press(key('s'));
+            double firstAfter = h.workbench.gridModel().table().value(h.workbench.gridModel().tableRow(0), Metric.COST);
+            assertAll(
+                    () -> assertEquals(last, firstAfter, "reversed: the most expensive first"),
+                    () -> assertTrue(h.line(1).contains("cost v"), h.line(1)));
+        }
+    }
+
+    @Test
+    void secondSortKeyOrdersTiesOfTheFirst() throws Exception {
+        try (ScreenHarness h = new ScreenHarness(100, 30, TerminalTraits.PLAIN, dir).ranked()) {
+            selectColumn(h, ShortlistColumn.MOTOR);
+            h.press(key('s'));
+            selectColumn(h, ShortlistColumn.COST);
+            h.press(key('S'));
+            ShortlistGridModel m = h.workbench.gridModel();
+            for (int i = 1; i < m.rowCount(); i++) {
+                int a = m.tableRow(i - 1);
+                int b = m.tableRow(i);
+                if (m.table().motorIndex(a) == m.table().motorIndex(b)) {
+                    assertTrue(m.table().value(a, Metric.COST) <= m.table().value(b, Metric.COST), "cost ascends within a motor");
+                }
+            }
+            assertTrue(h.line(0).contains("sort motor asc, cost asc"), h.line(0));
+            assertTrue(h.line(1).contains("cost ^2"), h.line(1));
+        }
+    }
+
+    @Test
+    void feasibleFilterHidesFailingRows() throws Exception {
+        try (ScreenHarness h = new ScreenHarness(100, 30, TerminalTraits.PLAIN, dir).ranked()) {
+            assertTrue(h.text().contains("FAIL"), "some pairings fail before filtering");
+            h.press(key('f'));
+            String screen = h.text();
+            int shown = h.workbench.gridModel().rowCount();
+            assertAll(
+                    () -> assertFalse(screen.contains("FAIL"), screen),
+                    () -> assertTrue(shown > 0 && shown < 180),
+                    () -> assertTrue(h.line(0).contains(shown + " shown / 180 total / " + shown + " feasible"), h.line(0)),
+                    () -> assertTrue(h.line(0).contains("only feasible"), h.line(0)));
+            h.press(key('z'));
+            assertTrue(h.line(0).contains("180 shown"), h.line(0));
+        }
+    }
+
+    @Test
+    void paretoFilterKeepsOnlyMarkedRows() throws Exception {
+        try (ScreenHarness h = new ScreenHarness(100, 30, TerminalTraits.PLAIN, dir).ranked()) {
+            h.press(key('p'));
+            int shown = h.workbench.gridModel().rowCount();
+            assertTrue(shown > 0 && shown < 180);
+            for (int row = 2; row < 2 + Math.min(shown, 20); row++) {
+                assertEquals('*', h.line(row).charAt(0), "every row shown carries the Pareto mark: " + h.line(row));
+            }
+        }
+    }
+
+    @Test
+    void textFilterKeepsPartsWhoseIdOrLabelMatches() throws Exception {
+        try (ScreenHarness h = new ScreenHarness(100, 30, TerminalTraits.PLAIN, dir).ranked()) {
+            h.press(key('/'));
+            assertTrue(h.line(h.rows() - 2).contains("find in part ids and labels"), h.line(h.rows() - 2));
+            h.type("sw-c").press(KeyType.Enter);
+            int shown = h.workbench.gridModel().rowCount();
+            assertEquals(6 * 3 * 2, shown, "6 motors x 1 switch x 3 frequencies x 2 ratios");
+        }
+    }
+
+    @Test
+    void marginThresholdHidesThinnerMargins() throws Exception {
+        try (ScreenHarness h = new ScreenHarness(100, 30, TerminalTraits.PLAIN, dir).ranked()) {
+            selectColumn(h, ShortlistColumn.MARGIN_JUNCTION);
+            h.press(key('m')).type("20").press(KeyType.Enter);
+            ShortlistGridModel m = h.workbench.gridModel();
+            assertTrue(m.rowCount() > 0 && m.rowCount() < 180);
+            for (int i = 0; i < m.rowCount(); i++) {
+                assertTrue(m.table().value(m.tableRow(i), Metric.MARGIN_JUNCTION) >= 0.2);
+            }
+            assertTrue(h.line(0).contains("m:Tj>=+20.0%"), h.line(0));
+        }
+    }
+
+    @Test
+    void badThresholdIsRefusedWithAMessage() throws Exception {
+        try (ScreenHarness h = new ScreenHarness(100, 30, TerminalTraits.PLAIN, dir).ranked()) {
+            h.press(key('m')).type("lots").press(KeyType.Enter);
+            assertTrue(h.line(h.rows() - 2).contains("expected a percentage"), h.line(h.rows() - 2));
+            h.press(KeyType.Escape);
+            assertEquals(180, h.workbench.gridModel().rowCount());
+        }
+    }
+
+    @Test
+    void detailShowsTheBindingMarginMarkedAndGoesBack() throws Exception {
+        try (ScreenHarness h = new ScreenHarness(100, 30, TerminalTraits.PLAIN, dir).ranked()) {
+            h.press(KeyType.Enter);
+            String screen = h.text();
+            String bindingLine = screen.lines().filter(l -> l.contains("junction temperature") && l.contains("violated"))
+                    .findFirst().orElse("");
+            assertAll(
+                    () -> assertTrue(h.line(0).contains("Pairing detail"), h.line(0)),
+                    () -> assertTrue(screen.contains("binding: junction temperature, margin -12.3%"), screen),
+                    () -> assertTrue(bindingLine.strip().startsWith(">"), "binding margin marked: " + bindingLine),
+                    () -> assertTrue(bindingLine.contains("violated") && bindingLine.contains("binding"), bindingLine),
+                    () -> assertTrue(screen.contains("FAIL"), "the verdict is a word"));
+            h.press(KeyType.PageDown).press(KeyType.PageDown);
+            String lower = h.text();
+            assertAll(
+                    () -> assertTrue(lower.contains("Losses per switch"), lower),
+                    () -> assertTrue(lower.contains("PWM frequency is audible"), lower),
+                    () -> assertTrue(lower.contains("I rms A"), "current plot"));
+            h.press(KeyType.Escape);
+            assertTrue(h.line(0).contains("shown /"), "back on the shortlist: " + h.line(0));
+        }
+    }
+
+    @Test
+    void resizingKeepsStatusHeadingAndFooterReadable() throws Exception {
+        try (ScreenHarness h = new ScreenHarness(100, 30, TerminalTraits.PLAIN, dir).ranked()) {
+            h.resize(80, 24);
+            assertAll(
+                    () -> assertTrue(h.line(0).contains("test-bench"), h.line(0)),
+                    () -> assertTrue(h.line(1).contains("motor") && h.line(1).contains("verdict"), h.line(1)),
+                    () -> assertTrue(h.line(23).contains("? help"), h.line(23)),
+                    () -> assertTrue(h.line(2).contains("mo-"), h.line(2)));
+            h.resize(160, 50);
+            assertAll(
+                    () -> assertTrue(h.line(49).contains("? help") && h.line(49).contains("b bench"), h.line(49)),
+                    () -> assertTrue(h.line(1).contains("Tw C"), "more columns fit at 160: " + h.line(1)),
+                    () -> assertTrue(h.line(47).contains("mo-"), "more rows fit at 50: " + h.line(47)));
+        }
+    }
+
+    @Test
+    void sidewaysScrollKeepsIdentityColumns() throws Exception {
+        try (ScreenHarness h = new ScreenHarness(80, 24, TerminalTraits.PLAIN, dir).ranked()) {
+            selectColumn(h, ShortlistColumn.MARGIN_DUTY);
+            String header = h.line(1);
+            assertAll(
+                    () -> assertTrue(header.contains("m:duty"), header),
+                    () -> assertTrue(header.contains("motor") && header.contains("switch"), header),
+                    () -> assertFalse(header.contains("verdict"), "scrolled past: " + header));
+            h.press(KeyType.ArrowLeft);
+            h.press(KeyType.Home);
+            selectColumn(h, ShortlistColumn.FREQUENCY);
+            assertTrue(h.line(1).contains("kHz"), h.line(1));
+        }
+    }
+
+    @Test
+    void monochromeStillMarksVerdictsAndCursor() throws Exception {
+        TerminalTraits mono = new TerminalTraits(ColorDepth.MONOCHROME, false);
+        try (ScreenHarness h = new ScreenHarness(100, 30, mono, dir).ranked()) {
+            String screen = h.text();
+            assertTrue(screen.contains(" ok ") && screen.contains("FAIL"), "verdicts are words");
+            assertTrue(h.at(5, 2).getModifiers().contains(SGR.REVERSE), "cursor row in reverse video");
+            assertFalse(h.at(5, 3).getModifiers().contains(SGR.REVERSE), "other rows not reversed");
+            h.press(KeyType.ArrowDown);
+            assertTrue(h.at(5, 3).getModifiers().contains(SGR.REVERSE), "cursor moved down");
+        }
+    }
+
+    @Test
+    void unicodeTerminalsGetUnicodeMarks() throws Exception {
+        TerminalTraits utf = new TerminalTraits(ColorDepth.INDEXED_256, true);
+        try (ScreenHarness h = new ScreenHarness(100, 30, utf, dir).ranked()) {
+            assertTrue(h.line(1).contains("margin \u25BC"), h.line(1));
+            assertTrue(h.text().contains("\u2502"), "column rule");
+        }
+    }
+
+    @Test
+    void implausiblePartsCarryAMark() throws Exception {
+        try (ScreenHarness h = new ScreenHarness(100, 30, TerminalTraits.PLAIN, dir, new Fixtures.FakeBackend(6, 5),
+                Set.of("sw-a")).ranked()) {
+            h.press(key('/')).type("sw-a").press(KeyType.Enter);
+            assertTrue(h.line(2).contains("!sw-a"), h.line(2));
+        }
+    }
+
+    @Test
+    void helpAndCautionsAreOneKeyAway() throws Exception {
+        try (ScreenHarness h = new ScreenHarness(100, 30, TerminalTraits.PLAIN, dir).ranked()) {
+            h.press(key('?'));
+            String help = h.text();
+            assertAll(
+                    () -> assertTrue(help.contains("Help: keys"), help),
+                    () -> assertTrue(help.contains("sort by the chosen column"), help),
+                    () -> assertTrue(help.contains("Pairing detail"), help));
+            h.press(key('c'));
+            String cautions = h.text();
+            assertAll(
+                    () -> assertTrue(cautions.contains("not a substitute for measuring the built drive"), cautions),
+                    () -> assertTrue(cautions.contains("can burn"), cautions),
+                    () -> assertTrue(cautions.contains("local electrical codes"), cautions),
+                    () -> assertTrue(cautions.contains("Verify temperatures on the real hardware"), cautions));
+            h.press(key('q')).press(KeyType.Escape);
+            assertTrue(h.line(0).contains("shown /"), h.line(0));
+            assertFalse(h.workbench.isFinished(), "q on a page goes back, it does not quit");
+        }
+    }
+
+    @Test
+    void exportWritesTheViewInItsOrder() throws Exception {
+        try (ScreenHarness h = new ScreenHarness(100, 30, TerminalTraits.PLAIN, dir).ranked()) {
+            selectColumn(h, ShortlistColumn.COST);
+            h.press(key('s')).press(key('f'));
+            h.press(key('x'));
+            assertTrue(h.line(h.rows() - 2).contains("shortlist.csv"), h.line(h.rows() - 2));
+            h.press(KeyType.Enter);
+            Path csv = dir.resolve("shortlist.csv");
+            List<String> lines = Files.readAllLines(csv);
+            ShortlistGridModel m = h.workbench.gridModel();
+            assertEquals(m.rowCount() + 1, lines.size(), "a heading and one line per row shown");
+            String firstId = m.context().motor(m.table().motorIndex(m.tableRow(0))).id();
+            assertTrue(lines.get(1).startsWith(firstId + ","), lines.get(1));
+            assertTrue(h.line(h.rows() - 2).contains("wrote " + m.rowCount() + " rows"), h.line(h.rows() - 2));
+        }
+    }
+
+    @Test
+    void exportRefusesNamesOutsideTheFolderAndAsksBeforeReplacing() throws Exception {
+        try (ScreenHarness h = new ScreenHarness(100, 30, TerminalTraits.PLAIN, dir).ranked()) {
+            h.press(key('x'));
+            for (int i = 0; i < ExportTarget.DEFAULT_NAME.length(); i++) {
+                h.press(KeyType.Backspace);
+            }
+            h.type("../escape").press(KeyType.Enter);
+            assertTrue(h.line(h.rows() - 2).contains("without folders"), h.line(h.rows() - 2));
+            assertFalse(Files.exists(dir.getParent().resolve("escape.csv")));
+            h.press(KeyType.Escape);
+            Files.writeString(dir.resolve("kept.csv"), "mine");
+            h.press(key('x'));
+            for (int i = 0; i < ExportTarget.DEFAULT_NAME.length(); i++) {
+                h.press(KeyType.Backspace);
+            }
+            h.type("kept").press(KeyType.Enter);
+            assertTrue(h.line(h.rows() - 2).contains("exists"), h.line(h.rows() - 2));
+            assertEquals("mine", Files.readString(dir.resolve("kept.csv")));
+            h.press(KeyType.Escape);
+            assertEquals("mine", Files.readString(dir.resolve("kept.csv")), "Esc keeps the file");
+        }
+    }
+
+    @Test
+    void longRankingShowsProgressAndEscStopsIt() throws Exception {
+        Fixtures.FakeBackend backend = new Fixtures.FakeBackend(6, 5);
+        backend.hold = new CountDownLatch(1);
+        try (ScreenHarness h = new ScreenHarness(100, 30, TerminalTraits.PLAIN, dir, backend, Set.of())) {
+            for (int i = 0; i < 200 && h.workbench.ranking().total() == 0; i++) {
+                Thread.sleep(5);
+            }
+            h.update();
+            h.workbench.tick();
+            h.update();
+            assertTrue(h.line(h.rows() - 2).contains("ranking 33%"), h.line(h.rows() - 2));
+            assertTrue(h.line(h.rows() - 2).contains("Esc stops"), h.line(h.rows() - 2));
+            h.press(KeyType.ArrowDown);
+            BackgroundRanking run = h.workbench.ranking();
+            h.press(KeyType.Escape);
+            run.await(5000);
+            h.press(KeyType.ArrowDown);
+            assertEquals(BackgroundRanking.State.CANCELLED, run.state());
+            assertTrue(h.text().contains("ranking stopped"), h.text());
+            backend.hold = null;
+            h.press(key('r'));
+            h.ranked();
+            assertTrue(h.line(0).contains("180 shown"), h.line(0));
+        }
+    }
+
+    @Test
+    void ctrlCQuitsFromAnyScreen() throws Exception {
+        try (ScreenHarness h = new ScreenHarness(100, 30, TerminalTraits.PLAIN, dir).ranked()) {
+            h.press(KeyType.Enter);
+            h.press(new KeyStroke('c', true, false));
+            assertTrue(h.workbench.isFinished());
+        }
+        try (ScreenHarness h = new ScreenHarness(100, 30, TerminalTraits.PLAIN, dir).ranked()) {
+            h.press(key('q'));
+            assertTrue(h.workbench.isFinished());
+        }
+    }
+
+    @Test
+    void editorChangesRankAgain() throws Exception {
+        try (ScreenHarness h = new ScreenHarness(100, 30, TerminalTraits.PLAIN, dir).ranked()) {
+            h.workbench.catalogChanged(Fixtures.catalog(3, 2), Set.of());
+            h.ranked();
+            assertTrue(h.line(0).contains("36 shown / 36 total"), h.line(0));
+            assertEquals(2, h.backend.rankings);
+        }
+    }
+}
