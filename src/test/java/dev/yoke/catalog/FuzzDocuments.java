@@ -52,10 +52,10 @@ final class FuzzDocuments {
     private FuzzDocuments() {
     }
 
-    /** Valid (or nearly valid) files to mutate: every YAML file in the project's resources, and two of ours. */
+    /** Files to mutate: the bundled catalog, the demo scenarios, every YAML file of the test resources (the broken-file corpus among them), and {@code builtIn}. */
     static List<String> seeds(List<String> builtIn) {
         List<String> seeds = new ArrayList<>(builtIn);
-        for (String folder : List.of("src/main/resources", "src/test/resources")) {
+        for (String folder : List.of("catalog", "demo-data", "src/main/resources", "src/test/resources")) {
             Path root = Path.of(folder);
             if (!Files.isDirectory(root)) {
                 continue;
