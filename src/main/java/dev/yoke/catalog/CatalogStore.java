@@ -87,6 +87,16 @@ public final class CatalogStore {
         loaded = CatalogLoader.load(folder);
     }
 
+    /** The catalog files as last loaded, in load (name) order. */
+    public synchronized List<Path> files() {
+        return loaded.files().stream().map(f -> absolute(f.path())).toList();
+    }
+
+    /** The file that defines the motor or switch {@code id}. */
+    public synchronized Optional<Path> fileOf(String id) {
+        return fileOfMotor(id).or(() -> fileOfSwitch(id));
+    }
+
     /** The file that defines motor {@code id}. */
     public synchronized Optional<Path> fileOfMotor(String id) {
         return Optional.ofNullable(loaded.motorOrigins().get(id)).map(Origin::file);

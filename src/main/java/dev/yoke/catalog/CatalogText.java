@@ -60,6 +60,14 @@ final class CatalogText {
      * @throws IOException when the text is not YAML or its top level is not a mapping
      */
     static CatalogText parse(String text) throws IOException {
+        for (int start = 0, end; start <= text.length(); start = end + 1) {
+            end = text.indexOf('\n', start);
+            end = end < 0 ? text.length() : end;
+            if (end - start > YamlReader.MAX_LINE_CHARS) {
+                // The loader refuses such files too; the scanner is slow on very long lines.
+                throw new IOException("a line is longer than " + YamlReader.MAX_LINE_CHARS + " characters");
+            }
+        }
         LoaderOptions options = new LoaderOptions();
         options.setMaxAliasesForCollections(50);
         options.setNestingDepthLimit(50);

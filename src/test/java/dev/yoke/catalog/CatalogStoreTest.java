@@ -242,6 +242,40 @@ class CatalogStoreTest {
         CatalogLock.acquire(folder, java.time.Duration.ofSeconds(5)).close();
     }
 
+    /** Every bundled part, written anew as a copy, loads back as the very same doubles (exact number format). */
+    @Test
+    void everyBundledPartCopiesExactly() throws Exception {
+        Path bundled = Files.createDirectories(folder.resolve("bundled"));
+        try (var files = Files.list(Path.of("catalog"))) {
+            for (Path file : files.filter(p -> p.toString().endsWith(".yaml")).toList()) {
+                Files.copy(file, bundled.resolve(file.getFileName()));
+            }
+        }
+        CatalogStore store = CatalogStore.open(bundled);
+        for (Motor m : store.catalog().motors()) {
+            store.saveMotor(store.copyOfMotor(m.id()), null, Path.of("copies.yaml"));
+        }
+        for (PowerSwitch s : store.catalog().switches()) {
+            store.saveSwitch(store.copyOfSwitch(s.id()), null, Path.of("copies.yaml"));
+        }
+        CatalogStore again = CatalogStore.open(bundled);
+        for (Motor m : again.catalog().motors()) {
+            if (!m.id().endsWith("-copy")) {
+                Motor copy = motor(again, m.id() + "-copy");
+                assertEquals(PartText.MOTOR.withIdAndLabel(m, copy.id(), copy.label()), copy);
+            }
+        }
+        List<PowerSwitch> switches = again.catalog().switches();
+        for (PowerSwitch s : switches) {
+            if (!s.id().endsWith("-copy")) {
+                PowerSwitch copy = switches.stream().filter(c -> c.id().equals(s.id() + "-copy")).findFirst().orElseThrow();
+                assertEquals(PartText.SWITCH.withIdAndLabel(s, copy.id(), copy.label()), copy);
+            }
+        }
+        assertEquals(2 * again.catalog().motors().stream().filter(m -> !m.id().endsWith("-copy")).count(),
+                again.catalog().motors().size(), "every motor has its copy");
+    }
+
     private static Motor motor(CatalogStore store, String id) {
         return store.catalog().motors().stream().filter(m -> m.id().equals(id)).findFirst().orElseThrow();
     }
