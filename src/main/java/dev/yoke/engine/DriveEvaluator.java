@@ -70,13 +70,27 @@ public final class DriveEvaluator implements PairingEvaluator {
                 scenario.profile(), pieces);
     }
 
-    /** Junction temperature of one cell (piece × position), °C: the closed form, or the runaway report. */
-    static double junctionTemp(SwitchConstants s, double conductionCoefficient, double otherLoss, double ambient) {
+    /**
+     * Steady loss of one cell (piece × position), W: the closed-form fixed point
+     * P = (A·R_DS(on)(T_a) + B)/(1 − R_th·A·R_25·α) of P = A·R_DS(on)(T_a + R_th·P) + B
+     * ({@link dev.yoke.physics.JunctionTemperature}); when no fixed point exists (runaway) the loss at the
+     * reported runaway temperature. The junction is then T_a + R_th·P.
+     */
+    static double cellLoss(SwitchConstants s, double conductionCoefficient, double otherLoss) {
         double stability = 1.0 - s.runawayFactor * conductionCoefficient;
         if (!(stability > 0)) {
-            return s.runawayJunctionTemp;
+            return conductionCoefficient * s.rdsOnAt(s.runawayJunctionTemp) + otherLoss;
         }
-        return ambient + s.rth * (conductionCoefficient * s.rAmbient + otherLoss) / stability;
+        return (conductionCoefficient * s.rAmbient + otherLoss) / stability;
+    }
+
+    /** Junction temperature of a cell from its loss, °C (the runaway report when no fixed point exists). */
+    static double cellJunction(SwitchConstants s, double conductionCoefficient, double loss, double ambient) {
+        double junction = ambient + s.rth * loss;
+        if (!(1.0 - s.runawayFactor * conductionCoefficient > 0)) {
+            return Math.max(junction, s.runawayJunctionTemp);
+        }
+        return junction;
     }
 
     /** Temperature-independent loss of one cell, W. */
@@ -89,35 +103,47 @@ public final class DriveEvaluator implements PairingEvaluator {
         MotorSidePlan plan = (MotorSidePlan) motorSide;
         SwitchConstants s = switches[switchIndex];
         int fi = plan.frequencyIndex;
+        double fixed = s.fixedHardLoss[fi];
+        double edge = s.edgeLossPerAmp[fi];
+        double diode = s.diodeLossPerAmp[fi];
+        double factor = s.runawayFactor;
+        double rAmbient = s.rAmbient;
+        double rth = s.rth;
+        double[] cells = plan.cells;
+        double[] needed = plan.neededVoltage;
+        double[] absCurrent = plan.absCurrent;
+        int perPiece = plan.distinct.length * MotorSidePlan.CELL;
         int n = plan.n;
-        int[] distinct = plan.distinct;
-        int[] multiplicity = plan.multiplicity;
-        double[] cond = plan.conduction;
-        double[] hard = plan.hard;
-        double[] hardI = plan.hardCurrent;
-        double[] freeI = plan.freeCurrent;
         double ta = ambient;
         double bridge = 0;
         double tjMax = ta;
         double headroom = Double.POSITIVE_INFINITY;
         boolean runaway = false;
+        int c = 0;
         for (int k = 0; k < n; k++) {
-            double w = plan.weight[k];
-            double tjPiece = ta;
-            int base = 4 * k;
-            for (int j = 0; j < distinct.length; j++) {
-                int c = base + distinct[j];
-                double a = cond[c];
-                double b = otherLoss(s, fi, hard[c], hardI[c], freeI[c]);
-                runaway |= !(1.0 - s.runawayFactor * a > 0);
-                double tj = junctionTemp(s, a, b, ta);
-                double loss = a * s.rdsOnAt(tj) + b;
-                bridge += multiplicity[j] * w * loss;
-                tjPiece = Math.max(tjPiece, tj);
+            double lossMax = 0;
+            boolean pieceRunaway = false;
+            for (int end = c + perPiece; c < end; c += MotorSidePlan.CELL) {
+                double a = cells[c];
+                double b = cells[c + 1] * fixed + cells[c + 2] * edge + cells[c + 3] * diode;
+                double stability = 1.0 - factor * a;
+                double loss;
+                if (stability > 0) {
+                    loss = (a * rAmbient + b) / stability;
+                } else {
+                    pieceRunaway = true;
+                    loss = cellLoss(s, a, b);
+                }
+                bridge += cells[c + 4] * loss;
+                lossMax = Math.max(lossMax, loss);
+            }
+            double tjPiece = ta + rth * lossMax;
+            if (pieceRunaway) {
+                runaway = true;
+                tjPiece = Math.max(tjPiece, s.runawayJunctionTemp);
             }
             tjMax = Math.max(tjMax, tjPiece);
-            double need = plan.neededVoltage[k] + 2 * plan.absCurrent[k] * s.rdsOnAt(tjPiece);
-            headroom = Math.min(headroom, plan.availableVoltage - need);
+            headroom = Math.min(headroom, plan.availableVoltage - needed[k] - 2 * absCurrent[k] * s.rdsOnAt(tjPiece));
         }
         fill(plan, s, row, bridge, tjMax, headroom, runaway);
     }
@@ -299,15 +325,16 @@ public final class DriveEvaluator implements PairingEvaluator {
                 int c = 4 * k + p;
                 double a = plan.conduction[c];
                 double b = otherLoss(s, fi, plan.hard[c], plan.hardCurrent[c], plan.freeCurrent[c]);
-                double tj = junctionTemp(s, a, b, ambient);
+                double cell = cellLoss(s, a, b);
+                double tj = cellJunction(s, a, cell, ambient);
                 double[] l = loss[p];
-                l[0] += t * a * s.rdsOnAt(tj);
+                l[0] += t * (cell - b);
                 l[1] += t * plan.hardCurrent[c] * s.edgeLossPerAmp[fi];
                 l[2] += t * plan.hard[c] * SwitchLossLaws.outputCapacitance(s.part.outputCapacitance(), busVoltage, f);
                 l[3] += t * plan.freeCurrent[c] * s.diodeLossPerAmp[fi];
                 l[4] += t * plan.hard[c] * SwitchLossLaws.reverseRecovery(s.part.reverseRecoveryCharge(), busVoltage, f);
                 junction[p] = Math.max(junction[p], tj);
-                bridge += a * s.rdsOnAt(tj) + b;
+                bridge += cell;
             }
             copper += t * plan.copperLoss[k];
             friction += t * plan.frictionLoss[k];

@@ -22,9 +22,9 @@ import java.util.List;
 final class MotorSidePlan implements PairingEvaluator.MotorSide {
 
     /** Passes of the copper-loss ↔ winding-temperature coupling (the ripple's weak dependence on R). */
-    static final int THERMAL_PASSES = 6;
-    /** Passes stop when no piece's mean winding temperature moves more than this, K. */
-    static final double THERMAL_TOLERANCE = 1e-7;
+    static final int THERMAL_PASSES = 4;
+    /** Passes stop when no piece's mean winding temperature moves more than this, K (far below the model's accuracy). */
+    static final double THERMAL_TOLERANCE = 1e-3;
     /** Audible limit of PWM ripple, Hz (common practice: the upper limit of human hearing). */
     static final double AUDIBLE_LIMIT = 20e3;
     /** L/R shorter than this many output periods reads as a rough current (common practice: "a few"). */
@@ -70,6 +70,10 @@ final class MotorSidePlan implements PairingEvaluator.MotorSide {
     final double[] hardCurrent;
     /** Per piece and position: freewheeling fraction × |I| (A). */
     final double[] freeCurrent;
+    /** Doubles per fast-path cell: conduction, hard, hard × |I|, freewheel × |I|, cycle weight × multiplicity. */
+    static final int CELL = 5;
+    /** Fast-path cells: for each piece, for each distinct position, {@link #CELL} doubles. */
+    final double[] cells;
     /** Positions whose coefficients differ, and how many positions each stands for. */
     final int[] distinct;
     final int[] multiplicity;
@@ -204,7 +208,7 @@ final class MotorSidePlan implements PairingEvaluator.MotorSide {
         // Electrical side at the final winding temperatures.
         double vMin = bench.busVoltageMin();
         availableVoltage = ConductionPattern.maxVoltageRatio(modulation, bench.maxDuty()) * vMin;
-        double outputFrequency = frequency / ConductionPattern.of(modulation, 0.5, 1.0).ripplePeriodFactor();
+        double outputFrequency = frequency / ConductionPattern.ripplePeriodFactor(modulation);
         double sumSquare = 0;
         double peakMax = 0;
         double duty = 0;
@@ -226,10 +230,9 @@ final class MotorSidePlan implements PairingEvaluator.MotorSide {
             double vWorst = Math.abs(v1) >= Math.abs(v0) ? v1 : v0;
             worstVoltage[k] = vWorst;
             neededVoltage[k] = Math.abs(vWorst);
-            ConductionPattern atWorst = ConductionPattern.of(modulation, vWorst / bus, i);
-            worstDuty[k] = atWorst.duty();
-            duty = Math.max(duty, Math.max(atWorst.highSideDuty(),
-                    ConductionPattern.of(modulation, (vWorst == v1 ? v0 : v1) / bus, i).highSideDuty()));
+            worstDuty[k] = ConductionPattern.reportedDuty(modulation, vWorst / bus);
+            duty = Math.max(duty, Math.max(ConductionPattern.highSideDuty(modulation, v0 / bus),
+                    ConductionPattern.highSideDuty(modulation, v1 / bus)));
 
             double variance = rippleVariance(modulation, bus, r, k, kt, motor);
             double ms = i * i + variance;
@@ -237,8 +240,8 @@ final class MotorSidePlan implements PairingEvaluator.MotorSide {
             sumSquare += weight[k] * ms;
 
             // Worst ripple over the ramp: the ripple peaks at an on-fraction of ½ and falls either side.
-            double d0 = ConductionPattern.of(modulation, v0 / bus, i).rippleOnFraction();
-            double d1 = ConductionPattern.of(modulation, v1 / bus, i).rippleOnFraction();
+            double d0 = ConductionPattern.rippleOnFraction(modulation, v0 / bus);
+            double d1 = ConductionPattern.rippleOnFraction(modulation, v1 / bus);
             double lo = Math.min(d0, d1);
             double hi = Math.max(d0, d1);
             if (modulation != Modulation.BIPOLAR && v0 * v1 < 0) {
@@ -341,6 +344,21 @@ final class MotorSidePlan implements PairingEvaluator.MotorSide {
         }
         distinct = java.util.Arrays.copyOf(rep, count);
         multiplicity = java.util.Arrays.copyOf(mult, count);
+
+        // The fast path's cells, piece by piece, distinct positions only, interleaved for locality.
+        cells = new double[CELL * n * count];
+        int c = 0;
+        for (int k = 0; k < n; k++) {
+            for (int j = 0; j < count; j++) {
+                int at = 4 * k + rep[j];
+                cells[c] = conduction[at];
+                cells[c + 1] = hard[at];
+                cells[c + 2] = hardCurrent[at];
+                cells[c + 3] = freeCurrent[at];
+                cells[c + 4] = weight[k] * mult[j];
+                c += CELL;
+            }
+        }
     }
 
     private boolean samePosition(int a, int b) {
@@ -369,10 +387,25 @@ final class MotorSidePlan implements PairingEvaluator.MotorSide {
         switchingCount[k] += share * pattern.switchingCount();
     }
 
+    // The last few waveforms, keyed by resistance and on-fraction: ramps and constant-speed pieces repeat them.
+    private final double[] memoResistance = new double[4];
+    private final double[] memoOnFraction = new double[4];
+    private final RippleWaveform[] memoWaveform = new RippleWaveform[4];
+    private int memoNext;
+
     private RippleWaveform waveform(Modulation modulation, double bus, double r, double onFraction) {
-        ConductionPattern shape = ConductionPattern.of(modulation, 0.5, 1.0);
-        return PwmRipple.waveform(shape.rippleSwing() * bus, r, motor.inductance(), onFraction,
-                shape.ripplePeriodFactor() / frequency);
+        for (int j = 0; j < memoWaveform.length; j++) {
+            if (memoWaveform[j] != null && memoResistance[j] == r && memoOnFraction[j] == onFraction) {
+                return memoWaveform[j];
+            }
+        }
+        RippleWaveform w = PwmRipple.waveform(ConductionPattern.rippleSwing(modulation) * bus, r, motor.inductance(),
+                onFraction, ConductionPattern.ripplePeriodFactor(modulation) / frequency);
+        memoResistance[memoNext] = r;
+        memoOnFraction[memoNext] = onFraction;
+        memoWaveform[memoNext] = w;
+        memoNext = (memoNext + 1) % memoWaveform.length;
+        return w;
     }
 
     /** Ripple variance averaged over the piece's voltage ramp (Simpson's rule on start, middle and end). */
@@ -381,12 +414,9 @@ final class MotorSidePlan implements PairingEvaluator.MotorSide {
         double v0 = DcMotor.terminalVoltage(i, r, kt, motorSpeedStart[k], m.brushDrop());
         double v1 = DcMotor.terminalVoltage(i, r, kt, motorSpeedEnd[k], m.brushDrop());
         double vm = (v0 + v1) / 2;
-        double a = waveform(modulation, bus, r, ConductionPattern.of(modulation, v0 / bus, i).rippleOnFraction())
-                .variance();
-        double b = waveform(modulation, bus, r, ConductionPattern.of(modulation, vm / bus, i).rippleOnFraction())
-                .variance();
-        double c = waveform(modulation, bus, r, ConductionPattern.of(modulation, v1 / bus, i).rippleOnFraction())
-                .variance();
+        double a = waveform(modulation, bus, r, ConductionPattern.rippleOnFraction(modulation, v0 / bus)).variance();
+        double b = waveform(modulation, bus, r, ConductionPattern.rippleOnFraction(modulation, vm / bus)).variance();
+        double c = waveform(modulation, bus, r, ConductionPattern.rippleOnFraction(modulation, v1 / bus)).variance();
         return (a + 4 * b + c) / 6;
     }
 

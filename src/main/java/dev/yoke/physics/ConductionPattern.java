@@ -94,7 +94,7 @@ public record ConductionPattern(
      * @param current     motor current, A (only its sign matters)
      */
     public static ConductionPattern of(Modulation modulation, double voltageRatio, double current) {
-        double v = Math.max(-1.0, Math.min(1.0, voltageRatio));
+        double v = clampRatio(voltageRatio);
         double m = Math.abs(v);
         double[] on = new double[POSITIONS];
         double[] hard = new double[POSITIONS];
@@ -104,20 +104,23 @@ public record ConductionPattern(
                 double d = (1 + v) / 2;
                 leg(on, hard, free, HIGH_A, d, true, current);
                 leg(on, hard, free, HIGH_B, 1 - d, true, -current);
-                return new ConductionPattern(on, hard, free, 4, 2.0, d, 1.0, d, Math.max(d, 1 - d));
+                return new ConductionPattern(on, hard, free, 4, rippleSwing(modulation), d,
+                        ripplePeriodFactor(modulation), d, highSideDuty(modulation, v));
             }
             case UNIPOLAR: {
                 double dA = (1 + v) / 2;
                 double dB = (1 - v) / 2;
                 leg(on, hard, free, HIGH_A, dA, true, current);
                 leg(on, hard, free, HIGH_B, dB, true, -current);
-                return new ConductionPattern(on, hard, free, 4, 1.0, m, 0.5, m, Math.max(dA, dB));
+                return new ConductionPattern(on, hard, free, 4, rippleSwing(modulation), m,
+                        ripplePeriodFactor(modulation), m, highSideDuty(modulation, v));
             }
             case SIGN_MAGNITUDE: {
                 boolean legASwitches = v >= 0;
                 leg(on, hard, free, HIGH_A, legASwitches ? m : 0, legASwitches, current);
                 leg(on, hard, free, HIGH_B, legASwitches ? 0 : m, !legASwitches, -current);
-                return new ConductionPattern(on, hard, free, 2, 1.0, m, 1.0, m, m);
+                return new ConductionPattern(on, hard, free, 2, rippleSwing(modulation), m,
+                        ripplePeriodFactor(modulation), m, highSideDuty(modulation, v));
             }
             default:
                 throw new IllegalArgumentException("unknown modulation " + modulation);
@@ -135,6 +138,37 @@ public record ConductionPattern(
             hard[sourcing ? high : low] = 1;
             free[sourcing ? low : high] = 1;
         }
+    }
+
+    private static double clampRatio(double voltageRatio) {
+        return Math.max(-1.0, Math.min(1.0, voltageRatio));
+    }
+
+    /** On-fraction δ of the output waveform: bipolar (1 + V/V_bus)/2, else |V|/V_bus. */
+    public static double rippleOnFraction(Modulation modulation, double voltageRatio) {
+        double v = clampRatio(voltageRatio);
+        return modulation == Modulation.BIPOLAR ? (1 + v) / 2 : Math.abs(v);
+    }
+
+    /** Duty as reported: bipolar d = (1 + V/V_bus)/2, unipolar and sign-magnitude m = |V|/V_bus. */
+    public static double reportedDuty(Modulation modulation, double voltageRatio) {
+        return rippleOnFraction(modulation, voltageRatio);
+    }
+
+    /** Largest high-switch on-fraction: (1 + m)/2 for bipolar and unipolar, m for sign-magnitude. */
+    public static double highSideDuty(Modulation modulation, double voltageRatio) {
+        double m = Math.abs(clampRatio(voltageRatio));
+        return modulation == Modulation.SIGN_MAGNITUDE ? m : (1 + m) / 2;
+    }
+
+    /** Output swing as a multiple of V_bus: 2 bipolar, 1 otherwise. */
+    public static double rippleSwing(Modulation modulation) {
+        return modulation == Modulation.BIPOLAR ? 2.0 : 1.0;
+    }
+
+    /** Output period as a multiple of 1/f: ½ unipolar (carriers 180° apart), 1 otherwise. */
+    public static double ripplePeriodFactor(Modulation modulation) {
+        return modulation == Modulation.UNIPOLAR ? 0.5 : 1.0;
     }
 
     /** Largest |V|/V_bus the scheme can make when no high switch may exceed {@code maxDuty}. */

@@ -58,7 +58,7 @@ public final class PwmRipple {
         double gOff = -Math.expm1(-off / tau);  // 1 − a_off
         double aOn = 1 - gOn;
         double aOff = 1 - gOff;
-        double gAll = -Math.expm1(-period / tau);
+        double gAll = gOn + gOff - gOn * gOff; // 1 − a_on·a_off = 1 − e^(−T_p/τ)
         double pp = (swing / resistance) * gOn * gOff / gAll;
         // Deviation at the start of the on interval (its minimum): periodic boundary condition.
         double yMin = (low * gOff + high * gOn * aOff) / gAll;

@@ -1,0 +1,61 @@
+package dev.yoke.tui.edit;
+
+import dev.yoke.model.Catalog;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Optional;
+
+/**
+ * The catalog files as the parts editor sees them: what they hold, and the writes it asks for.
+ * Writes are atomic and keep a backup of the previous file; text outside the changed part is
+ * the store's to keep.
+ */
+public interface PartStore {
+
+    /** The parts as last loaded or saved. */
+    Catalog catalog();
+
+    /** The catalog files, in load order; new parts go to the first by default. */
+    List<Path> files();
+
+    /** The file holding the part with that id. */
+    Optional<Path> fileOf(String id);
+
+    /**
+     * Writes one change.
+     *
+     * @throws ChangedOnDiskException when the file was changed by someone else since it was loaded;
+     *                                nothing was written
+     * @throws IOException            when the file cannot be written; it is then unchanged
+     */
+    void apply(PartChange change) throws IOException, ChangedOnDiskException;
+
+    /**
+     * Keeps both versions after a {@link ChangedOnDiskException}: the file on disk stays as it is,
+     * and the edited version is written beside it.
+     *
+     * @return where the edited version went
+     */
+    Path applyBeside(PartChange change) throws IOException;
+
+    /** Reads every file again from disk, forgetting what was loaded before. */
+    void reload() throws IOException;
+
+    /** A file changed by someone else since it was loaded. */
+    final class ChangedOnDiskException extends Exception {
+
+        private final transient Path file;
+
+        public ChangedOnDiskException(Path file) {
+            super(file + " changed on disk since it was loaded");
+            this.file = file;
+        }
+
+        /** The changed file. */
+        public Path file() {
+            return file;
+        }
+    }
+}

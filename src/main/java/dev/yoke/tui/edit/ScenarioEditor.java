@@ -1,0 +1,234 @@
+package dev.yoke.tui.edit;
+
+import com.googlecode.lanterna.TerminalSize;
+import com.googlecode.lanterna.gui2.BasicWindow;
+import com.googlecode.lanterna.gui2.Direction;
+import com.googlecode.lanterna.gui2.Label;
+import com.googlecode.lanterna.gui2.LinearLayout;
+import com.googlecode.lanterna.gui2.Panel;
+import com.googlecode.lanterna.gui2.Window;
+import com.googlecode.lanterna.gui2.WindowBasedTextGUI;
+import com.googlecode.lanterna.input.KeyStroke;
+import com.googlecode.lanterna.input.KeyType;
+import dev.yoke.model.Scenario;
+import dev.yoke.model.Segment;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Objects;
+import java.util.Optional;
+import java.util.function.Consumer;
+
+/**
+ * The scenario editor: the bench, its limits and the profile's scalars as a form, the profile's
+ * segments as a table. Every valid change is passed to {@code onChange} when the user leaves the
+ * changed field or cell (so half-typed values are not ranked); an invalid value is shown beside
+ * its field and passed nowhere. F2 writes the file (atomically, keeping a backup); Esc closes,
+ * asking first when the file is behind the screen.
+ */
+public final class ScenarioEditor extends BasicWindow {
+
+    private static final String FORM_KEYS =
+            "Up/Down field  type to edit  Space choice  Tab segments  F2 save file  Esc close";
+    private static final String TABLE_KEYS =
+            "arrows cell  Enter edit  a add  x remove  [ ] move up/down  Tab bench  F2 save  Esc close";
+    private static final String EDIT_KEYS =
+            "type to edit  Enter keep  Esc undo  Tab next cell  Shift+Tab previous cell";
+
+    private final WindowBasedTextGUI gui;
+    private final Path file;
+    private final Consumer<Scenario> onChange;
+    private final ScenarioSaver saver;
+    private final FieldForm form;
+    private final SegmentTable table;
+    private final Label title = new Label("");
+    private final Label heading = new Label("");
+    private final Label status = new Label("");
+    private final Label state = new Label("");
+    private final Label keys = new Label("");
+    private Scenario passedOn;
+    private Scenario saved;
+    private String message = "";
+
+    private ScenarioEditor(WindowBasedTextGUI gui, Scenario scenario, Path file, Consumer<Scenario> onChange,
+                           ScenarioSaver saver) {
+        super("Scenario");
+        this.gui = gui;
+        this.file = file;
+        this.onChange = Objects.requireNonNull(onChange, "onChange");
+        this.saver = Objects.requireNonNull(saver, "saver");
+        this.passedOn = scenario;
+        this.saved = scenario;
+        setHints(List.of(Window.Hint.FULL_SCREEN, Window.Hint.NO_DECORATIONS));
+        TerminalSize screen = gui.getScreen().getTerminalSize();
+        int spare = Math.max(8, screen.getRows() - 6);
+        int formRows = Math.max(4, spare * 10 / 18);
+        int tableRows = Math.max(3, spare - formRows);
+        form = new FieldForm(ScenarioFields.fields(), ScenarioFields.rules(), formRows);
+        ScenarioFields.fill(form, scenario);
+        table = new SegmentTable(scenario.profile().segments(), tableRows);
+        form.onEdit(f -> refresh()).onCommit(f -> passOn());
+        table.onEdit(t -> refresh()).onChange(t -> passOn());
+
+        Panel panel = new Panel(new LinearLayout(Direction.VERTICAL).setSpacing(0));
+        panel.addComponent(title);
+        panel.addComponent(form);
+        panel.addComponent(heading);
+        panel.addComponent(table);
+        panel.addComponent(status);
+        panel.addComponent(state);
+        panel.addComponent(keys);
+        setComponent(panel);
+        setFocusedInteractable(form);
+        refresh();
+    }
+
+    /**
+     * Opens the editor on top of the workbench, saving through the catalog package's scenario writer.
+     *
+     * @param gui      the workbench's window manager
+     * @param scenario what the workbench ranks now
+     * @param file     where F2 writes the scenario
+     * @param onChange receives each valid edited scenario (on the GUI thread: hand it to a background ranker)
+     */
+    public static ScenarioEditor open(WindowBasedTextGUI gui, Scenario scenario, Path file,
+                                      Consumer<Scenario> onChange) {
+        return open(gui, scenario, file, onChange, ScenarioFiles.defaultSaver());
+    }
+
+    /** Like {@link #open(WindowBasedTextGUI, Scenario, Path, Consumer)} with the file writer given. */
+    public static ScenarioEditor open(WindowBasedTextGUI gui, Scenario scenario, Path file,
+                                      Consumer<Scenario> onChange, ScenarioSaver saver) {
+        ScenarioEditor editor = new ScenarioEditor(gui, scenario, file, onChange, saver);
+        gui.addWindow(editor);
+        return editor;
+    }
+
+    /** The scenario on screen, or empty while any value is invalid. */
+    public Optional<Scenario> current() {
+        Optional<Map<String, Object>> values = form.values();
+        Optional<List<Segment>> segments = table.segments();
+        if (values.isEmpty() || segments.isEmpty()) {
+            return Optional.empty();
+        }
+        return Optional.of(ScenarioFields.build(values.get(), segments.get()));
+    }
+
+    /** Every current problem, form first, then segments. */
+    public List<String> problems() {
+        List<String> out = new ArrayList<>();
+        form.problems().forEach((k, v) -> out.add(k + ": " + v));
+        out.addAll(table.problems());
+        return out;
+    }
+
+    private void passOn() {
+        current().ifPresent(s -> {
+            if (!s.equals(passedOn)) {
+                passedOn = s;
+                onChange.accept(s);
+            }
+        });
+        refresh();
+    }
+
+    /** Writes the file when everything is valid; otherwise says why not. */
+    public void save() {
+        Optional<Scenario> s = current();
+        if (s.isEmpty()) {
+            message = "Not saved: " + summary();
+            refresh();
+            return;
+        }
+        passOn();
+        try {
+            saver.save(s.get(), file);
+            saved = s.get();
+            message = "Saved " + file.getFileName() + " (previous version kept as "
+                    + file.getFileName() + ".bak)";
+        } catch (IOException e) {
+            message = "Not saved: " + file + ": " + e.getMessage();
+        } catch (RuntimeException e) {
+            message = "Not saved: " + e.getMessage();
+        }
+        refresh();
+    }
+
+    private String summary() {
+        List<String> p = problems();
+        if (p.isEmpty()) {
+            return "";
+        }
+        List<String> where = new ArrayList<>(form.problems().keySet());
+        where.addAll(table.problemPlaces());
+        return (p.size() == 1 ? "1 problem: " : p.size() + " problems: ") + String.join(", ", where);
+    }
+
+    private void refresh() {
+        String name = form.text(ScenarioFields.NAME);
+        title.setText("SCENARIO " + name + "   file " + (file == null ? "(none)" : file.toString()));
+        double cycle = 0;
+        Optional<List<Segment>> segments = table.segments();
+        if (segments.isPresent()) {
+            for (Segment seg : segments.get()) {
+                cycle += seg.duration();
+            }
+        }
+        heading.setText("PROFILE SEGMENTS  " + table.size() + " segments"
+                + (segments.isPresent() ? ", cycle " + Quantities.SECONDS.format(cycle) : ""));
+        boolean inTable = getFocusedInteractable() == table;
+        status.setText(inTable ? table.selectedStatus() : form.selectedStatus());
+        String problems = summary();
+        String fileState = Objects.equals(current().orElse(null), saved) ? "file up to date" : "unsaved (F2 saves)";
+        if (!message.isEmpty()) {
+            state.setText(message);
+        } else if (problems.isEmpty()) {
+            state.setText("All values valid, passed to the ranking; " + fileState + ".");
+        } else {
+            state.setText("NOT passed on: " + problems);
+        }
+        keys.setText(inTable ? (table.isEditing() ? EDIT_KEYS : TABLE_KEYS) : FORM_KEYS);
+    }
+
+    @Override
+    public boolean handleInput(KeyStroke key) {
+        message = "";
+        boolean handled = super.handleInput(key);
+        if (!handled) {
+            if (key.getKeyType() == KeyType.F2) {
+                save();
+                return true;
+            }
+            if (key.getKeyType() == KeyType.Escape) {
+                closeAsking();
+                return true;
+            }
+        }
+        refresh();
+        return handled;
+    }
+
+    private void closeAsking() {
+        passOn();
+        if (Objects.equals(current().orElse(null), saved)) {
+            close();
+            return;
+        }
+        LinkedHashMap<String, Runnable> answers = new LinkedHashMap<>();
+        answers.put("Save", () -> {
+            save();
+            if (Objects.equals(current().orElse(null), saved)) {
+                close();
+            }
+        });
+        answers.put("Close unsaved", this::close);
+        answers.put("Stay", this::refresh);
+        ChoiceWindow.ask(gui, "Scenario file not saved",
+                current().isPresent() ? "The file is older than the screen. Save it?"
+                        : "Some values are invalid and the file is older than the screen.", answers);
+    }
+}
