@@ -10,7 +10,7 @@ import picocli.CommandLine.Command;
         mixinStandardHelpOptions = true,
         versionProvider = VersionProvider.class,
         description = "Choose a brushed DC motor and the four switches of its PWM H-bridge for a duty profile.",
-        subcommands = {CheckCommand.class})
+        subcommands = {CheckCommand.class, RankCommand.class, ExplainCommand.class, BenchCommand.class})
 public final class YokeCommand implements Callable<Integer> {
 
     /** Exit status: results found. */

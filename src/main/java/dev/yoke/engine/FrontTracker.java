@@ -15,15 +15,15 @@ final class FrontTracker {
     private float[] frontLoss = new float[0];
     private int compactAt = 1024;
 
-    /** Considers row {@code row} of {@code from} (already known feasible). */
-    void offer(RowStore from, int row) {
-        float cost = from.values[Metric.COST.ordinal()][row];
-        float loss = from.values[Metric.TOTAL_LOSS.ordinal()][row];
+    /** Considers a feasible pairing's summary row. */
+    void offer(double[] summary, int motor, int powerSwitch, int frequency, int ratio) {
+        float cost = (float) summary[Metric.COST.ordinal()];
+        float loss = (float) summary[Metric.TOTAL_LOSS.ordinal()];
         if (Float.isNaN(cost) || Float.isNaN(loss) || dominated(cost, loss)) {
             return;
         }
         store.ensureCapacity(store.size + 1);
-        store.copyRow(from, row, store.size++);
+        store.set(store.size++, motor, powerSwitch, frequency, ratio, summary);
         if (store.size >= compactAt) {
             compact();
         }

@@ -107,6 +107,21 @@ public record RowFilter(boolean feasibleOnly, boolean paretoOnly, double maxCost
             return field != null && field.toLowerCase(Locale.ROOT).contains(word);
         }
 
+        /** Ordinals of the metric columns the filter reads. */
+        int[] metricsRead() {
+            java.util.BitSet used = new java.util.BitSet();
+            if (filter.feasibleOnly) {
+                used.set(Metric.FEASIBLE.ordinal());
+            }
+            if (filter.maxCost != Double.POSITIVE_INFINITY) {
+                used.set(Metric.COST.ordinal());
+            }
+            for (int m : boundMetric) {
+                used.set(m);
+            }
+            return used.stream().toArray();
+        }
+
         /** Every condition but the Pareto one (which needs the whole sweep). */
         boolean testWithoutPareto(RowStore s, int row) {
             if (filter.feasibleOnly && !s.feasible(row)) {

@@ -57,6 +57,17 @@ final class RowStore {
         }
     }
 
+    /** Writes the identity and only the listed metric columns (the rest may stay stale until {@link #set}). */
+    void setSome(int row, int motorIndex, int switchIndex, int frequencyIndex, int ratioIndex, double[] summary, int[] metrics) {
+        motor[row] = motorIndex;
+        powerSwitch[row] = switchIndex;
+        frequency[row] = (short) frequencyIndex;
+        ratio[row] = (short) ratioIndex;
+        for (int m : metrics) {
+            values[m][row] = (float) summary[m];
+        }
+    }
+
     /** Copies row {@code src} of {@code from} into row {@code dst} of this store. */
     void copyRow(RowStore from, int src, int dst) {
         motor[dst] = from.motor[src];

@@ -116,6 +116,7 @@ public final class Sweep {
         final int ratios;
         final RowStore all;
         final RowFilter.Prepared filter;
+        final int[] earlyColumns;
         final AtomicInteger next = new AtomicInteger();
         final AtomicInteger done = new AtomicInteger();
         final AtomicInteger reported = new AtomicInteger(-1);
@@ -135,6 +136,16 @@ public final class Sweep {
             this.ratios = ratios;
             this.all = keepAll >= 0 ? new RowStore(keepAll) : null;
             this.filter = options.filter().prepare(evaluator.catalog());
+            java.util.BitSet early = new java.util.BitSet();
+            for (int m : filter.metricsRead()) {
+                early.set(m);
+            }
+            for (SortKey k : options.order()) {
+                if (k.column().kind() == Column.Kind.METRIC) {
+                    early.set(k.column().metric().ordinal());
+                }
+            }
+            this.earlyColumns = early.stream().toArray();
         }
 
         void runOn(int threads) {
@@ -244,17 +255,21 @@ public final class Sweep {
                             }
                         }
                     } else {
+                        // Only the columns the order and the filter read are written before the
+                        // row is judged; the whole row is written for the few that are kept.
                         TopBuffer t = top;
                         RowStore ts = t.store;
+                        int[] early = j.earlyColumns;
                         for (int s = 0; s < switches; s++) {
                             ev.summarize(side, s, r);
-                            int slot = t.claim();
-                            ts.set(slot, motor, s, frequency, ratio, r);
                             if (r[feasibleSlot] != 0) {
                                 feasible++;
-                                front.offer(ts, slot);
+                                front.offer(r, motor, s, frequency, ratio);
                             }
-                            if (j.filter.testWithoutPareto(ts, slot)) {
+                            int slot = t.claim();
+                            ts.setSome(slot, motor, s, frequency, ratio, r, early);
+                            if (t.wouldKeep() && j.filter.testWithoutPareto(ts, slot)) {
+                                ts.set(slot, motor, s, frequency, ratio, r);
                                 t.offer();
                             }
                         }

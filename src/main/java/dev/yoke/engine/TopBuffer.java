@@ -41,12 +41,17 @@ final class TopBuffer {
         return free[freeCount - 1];
     }
 
-    /** Offers the row just written into {@link #claim()}'s slot. */
+    /**
+     * Whether the row in {@link #claim()}'s slot would be kept: false when it is not better than
+     * the N-th kept row. Only the sort-key columns of the slot need to be written for this.
+     */
+    boolean wouldKeep() {
+        return keptCount < limit || order.compare(free[freeCount - 1], kept[limit - 1]) < 0;
+    }
+
+    /** Keeps the row just written into {@link #claim()}'s slot (after {@link #wouldKeep()} said yes). */
     void offer() {
         int slot = free[freeCount - 1];
-        if (keptCount == limit && order.compare(slot, kept[limit - 1]) >= 0) {
-            return; // worse than the N-th kept row: the slot stays free
-        }
         freeCount--;
         pending[pendingCount++] = slot;
         if (freeCount == 0) {

@@ -33,7 +33,7 @@ public final class ExplainText {
 
         out.append("\nOperating points (each segment at its fastest, hardest point)\n");
         TextTable ops = new TextTable(" ")
-                .column("segment", false, 12).right("time").right("speed").right("torque").right("I avg")
+                .left("segment").right("time").right("speed").right("torque").right("I avg")
                 .right("V term").right("duty").right("ripple").right("I rms").right("I peak");
         for (SegmentResult s : r.segments()) {
             ops.row(s.label(), Cells.full(s.duration(), Dimension.TIME), Cells.full(s.motorSpeed(), Dimension.ANGULAR_SPEED),
@@ -49,7 +49,7 @@ public final class ExplainText {
         List<SegmentResult> segs = r.segments();
         String[] positions = segs.isEmpty() ? new String[] {"HA", "LA", "HB", "LB"}
                 : segs.get(0).switchLosses().stream().map(SwitchLoss::position).toArray(String[]::new);
-        TextTable loss = new TextTable(" ").column("segment", false, 12);
+        TextTable loss = new TextTable(" ").left("segment");
         for (String p : positions) {
             loss.right(p);
         }

@@ -1,5 +1,8 @@
 package dev.yoke.tui.edit;
 
+import dev.yoke.catalog.PartFields;
+import dev.yoke.catalog.PartKind;
+import dev.yoke.catalog.PartRules;
 import dev.yoke.model.Catalog;
 import dev.yoke.model.Motor;
 import dev.yoke.units.Dimension;
@@ -8,41 +11,28 @@ import dev.yoke.units.Units;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
 
 /** Motors in the parts editor: every {@link Motor} field with its unit and range. */
-public final class MotorKind implements PartKind<Motor> {
+public final class MotorEditing implements EditablePart<Motor> {
 
     /** The one instance. */
-    public static final MotorKind INSTANCE = new MotorKind();
+    public static final MotorEditing INSTANCE = new MotorEditing();
 
-    private static final List<FieldSpec> FIELDS = List.of(
-            FieldSpec.text("id", false),
-            FieldSpec.text("label", true),
-            FieldSpec.quantity("nominal_voltage", Quantities.VOLTS, FieldCheck.POSITIVE),
-            FieldSpec.quantity("resistance", Quantities.OHMS, FieldCheck.POSITIVE),
-            FieldSpec.optionalQuantity("resistance_temp", Quantities.CELSIUS,
-                    FieldCheck.between(-60, 200, "-60…200 °C"), 20.0),
-            FieldSpec.quantity("inductance", Quantities.HENRIES, FieldCheck.POSITIVE),
-            FieldSpec.quantity("torque_constant", Quantities.NEWTON_METRES_PER_AMPERE, FieldCheck.POSITIVE),
-            FieldSpec.quantity("no_load_current", Quantities.AMPERES, FieldCheck.NOT_NEGATIVE),
-            FieldSpec.quantity("continuous_current", Quantities.AMPERES, FieldCheck.POSITIVE),
-            FieldSpec.quantity("peak_current", Quantities.AMPERES, FieldCheck.POSITIVE),
-            FieldSpec.quantity("max_speed", Quantities.RADIANS_PER_SECOND, FieldCheck.POSITIVE),
-            FieldSpec.quantity("rotor_inertia", Quantities.KILOGRAM_SQUARE_METRES, FieldCheck.POSITIVE),
-            FieldSpec.quantity("rth_winding_housing", Quantities.KELVIN_PER_WATT, FieldCheck.POSITIVE),
-            FieldSpec.quantity("rth_housing_ambient", Quantities.KELVIN_PER_WATT, FieldCheck.POSITIVE),
-            FieldSpec.quantity("tau_winding", Quantities.SECONDS, FieldCheck.POSITIVE),
-            FieldSpec.quantity("tau_housing", Quantities.SECONDS, FieldCheck.POSITIVE),
-            FieldSpec.quantity("max_winding_temp", Quantities.CELSIUS, FieldCheck.between(40, 250, "40…250 °C")),
-            FieldSpec.optionalQuantity("brush_drop", Quantities.VOLTS, FieldCheck.NOT_NEGATIVE, 0.0),
-            FieldSpec.optionalQuantity("mass", Quantities.KILOGRAMS, FieldCheck.NOT_NEGATIVE, 0.0),
-            FieldSpec.optionalQuantity("price", Quantities.PRICE, FieldCheck.NOT_NEGATIVE, 0.0));
+    /** Keys the model does not keep: the loader turns them into the torque constant. */
+    private static final Set<String> NOT_EDITED = Set.of("back_emf_constant", "speed_constant");
 
-    private static final List<FormRule> RULES = List.of(
-            FormRule.notBelow("peak_current", "continuous_current"),
-            FormRule.notAbove("no_load_current", "continuous_current"));
+    private static final List<FormField> FIELDS = PartFields.of(PartKind.MOTOR).stream()
+            .filter(f -> !NOT_EDITED.contains(f.key()))
+            .map(FormField::of)
+            .toList();
 
-    private MotorKind() {
+    private static final List<FormRule> RULES = List.of(FormRule.onRecord(
+            FIELDS.stream().map(FormField::key).toList(),
+            INSTANCE::build,
+            m -> issues(PartRules.motorErrors(m))));
+
+    private MotorEditing() {
     }
 
     @Override
@@ -56,7 +46,7 @@ public final class MotorKind implements PartKind<Motor> {
     }
 
     @Override
-    public List<FieldSpec> fields() {
+    public List<FormField> fields() {
         return FIELDS;
     }
 
@@ -99,6 +89,15 @@ public final class MotorKind implements PartKind<Motor> {
                 d(v, "peak_current"), d(v, "max_speed"), d(v, "rotor_inertia"), d(v, "rth_winding_housing"),
                 d(v, "rth_housing_ambient"), d(v, "tau_winding"), d(v, "tau_housing"), d(v, "max_winding_temp"),
                 d(v, "brush_drop"), d(v, "mass"), d(v, "price"));
+    }
+
+    /** The catalog's issues by field, first message per field. */
+    static Map<String, String> issues(List<PartRules.FieldIssue> issues) {
+        Map<String, String> out = new LinkedHashMap<>();
+        for (PartRules.FieldIssue i : issues) {
+            out.putIfAbsent(i.field(), i.message());
+        }
+        return out;
     }
 
     private static double d(Map<String, Object> v, String key) {

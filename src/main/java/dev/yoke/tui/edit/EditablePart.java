@@ -12,7 +12,7 @@ import java.util.function.Function;
  *
  * @param <T> the part record
  */
-public interface PartKind<T> {
+public interface EditablePart<T> {
 
     /** Singular name, e.g. {@code motor}. */
     String noun();
@@ -21,7 +21,7 @@ public interface PartKind<T> {
     String plural();
 
     /** Every field, in form order; the first two are {@code id} and {@code label}. */
-    List<FieldSpec> fields();
+    List<FormField> fields();
 
     /** Checks across fields (a peak rating not below the continuous one…). */
     List<FormRule> rules();

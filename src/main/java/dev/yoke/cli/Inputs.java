@@ -1,0 +1,84 @@
+package dev.yoke.cli;
+
+import dev.yoke.catalog.CatalogFile;
+import dev.yoke.catalog.CatalogLoader;
+import dev.yoke.catalog.InputException;
+import dev.yoke.catalog.LoadedCatalog;
+import dev.yoke.catalog.LoadedScenario;
+import dev.yoke.catalog.Problem;
+import dev.yoke.catalog.ScenarioLoader;
+import dev.yoke.report.Meta;
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.time.Instant;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * A scenario and a catalog loaded for a command, with their warnings printed. Both are read even
+ * when the first fails, so the user sees every problem of one run at once.
+ */
+record Inputs(LoadedScenario scenario, LoadedCatalog catalog) {
+
+    /**
+     * Loads both; prints warnings to {@code err}.
+     *
+     * @throws InputException with the problems of both files
+     */
+    static Inputs load(Path scenarioFile, Path catalogDir, PrintWriter err) throws InputException {
+        List<Problem> problems = new ArrayList<>();
+        LoadedCatalog catalog = null;
+        LoadedScenario scenario = null;
+        try {
+            catalog = CatalogLoader.load(catalogDir);
+        } catch (InputException e) {
+            problems.addAll(e.problems());
+        }
+        try {
+            scenario = ScenarioLoader.load(scenarioFile);
+        } catch (InputException e) {
+            problems.addAll(e.problems());
+        }
+        if (scenario == null || catalog == null) {
+            throw new InputException(problems);
+        }
+        for (Problem w : catalog.warnings()) {
+            err.println(w);
+        }
+        for (Problem w : scenario.warnings()) {
+            err.println(w);
+        }
+        return new Inputs(scenario, catalog);
+    }
+
+    /** Prints every problem as {@code file:line:column: field: message}, errors last; returns status 2. */
+    static int report(InputException e, PrintWriter err) {
+        for (Problem p : e.problems()) {
+            if (p.warning()) {
+                err.println(p);
+            }
+        }
+        for (Problem p : e.errors()) {
+            err.println(p);
+        }
+        int n = e.errors().size();
+        err.println(n + (n == 1 ? " error" : " errors") + "; nothing evaluated");
+        err.flush();
+        return YokeCommand.BAD_INPUT;
+    }
+
+    /** What an export needs to be reproduced. */
+    Meta meta(List<String> command, Map<String, String> options) {
+        List<Meta.SourceFile> files = new ArrayList<>();
+        for (CatalogFile f : catalog.files()) {
+            files.add(source(f));
+        }
+        return new Meta(VersionProvider.version(), Instant.now(), source(scenario.file()), files, command, options);
+    }
+
+    private static Meta.SourceFile source(CatalogFile f) {
+        return new Meta.SourceFile(f.path().toString(), f.sha256(), f.size(),
+                f.lastModified() == null ? null : f.lastModified().toInstant());
+    }
+}
