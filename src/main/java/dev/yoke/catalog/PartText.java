@@ -147,6 +147,22 @@ final class PartText<T> {
         return id.apply(part);
     }
 
+    /**
+     * A whole catalog file holding {@code parts}: {@code header} (comment lines), then the list,
+     * each part in table order. Used to write generated catalogs in one go.
+     */
+    String renderFile(String header, List<T> parts) {
+        StringBuilder out = new StringBuilder(header).append(listKey()).append(parts.isEmpty() ? ": []\n" : ":\n");
+        for (T part : parts) {
+            String prefix = "  - ";
+            for (FieldValue field : allFields(part)) {
+                out.append(prefix).append(field.key()).append(": ").append(field.scalar()).append('\n');
+                prefix = "    ";
+            }
+        }
+        return out.toString();
+    }
+
     /** Every field of a new part, in table order; empty optional text (label, package) is left out. */
     List<FieldValue> allFields(T part) {
         List<FieldValue> fields = new ArrayList<>();
