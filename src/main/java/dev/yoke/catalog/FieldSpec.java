@@ -36,7 +36,7 @@ public record FieldSpec(PartKind part, String key, FieldType type, Dimension dim
      */
     public FieldResult validate(String text) {
         if (text == null || text.isBlank()) {
-            return FieldResult.refused(required ? "a value is required" : "no value given");
+            return FieldResult.refused("has no value");
         }
         String t = text.strip();
         return switch (type) {

@@ -33,8 +33,8 @@ public final class PartFields {
 
     static {
         Table catalog = new Table(PartKind.CATALOG);
-        catalog.optional("motors", SECTION_LIST, null, null, "none", Range.ANY, "the motors of this file");
-        catalog.optional("switches", SECTION_LIST, null, null, "none", Range.ANY, "the switches of this file");
+        catalog.optional("motors", SECTION_LIST, null, null, "", Range.ANY, "the motors of this file");
+        catalog.optional("switches", SECTION_LIST, null, null, "", Range.ANY, "the switches of this file");
 
         Table motor = new Table(PartKind.MOTOR);
         motor.required("id", IDENTIFIER, null, Range.ANY, "unique key of the motor across the catalog");

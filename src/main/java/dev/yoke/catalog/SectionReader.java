@@ -42,10 +42,13 @@ final class SectionReader {
             return null;
         }
         SectionValues values = new SectionValues(map);
+        java.util.Set<String> suggested = new java.util.HashSet<>();
         for (YamlNode.Entry entry : map.entries().values()) {
             Optional<FieldSpec> spec = PartFields.find(kind, entry.key());
             if (spec.isEmpty()) {
-                String hint = PartFields.suggest(kind, entry.key()).map(s -> "; did you mean '" + s + "'?")
+                Optional<String> suggestion = PartFields.suggest(kind, entry.key());
+                suggestion.ifPresent(suggested::add);
+                String hint = suggestion.map(s -> "; did you mean '" + s + "'?")
                         .orElse("; see docs/file-formats.md for the keys of a " + kind.noun());
                 error(entry.line(), entry.column(), entry.key(), "unknown key in " + where + hint);
                 values.fail();
@@ -57,7 +60,9 @@ final class SectionReader {
             if (values.has(spec.key()) || values.given(spec.key())) {
                 continue;
             }
-            if (spec.required()) {
+            if (spec.required() && suggested.contains(spec.key())) {
+                values.fail(); // already reported as a misspelling
+            } else if (spec.required()) {
                 error(map.line(), map.column(), spec.key(), "missing; every " + kind.noun() + " needs it ("
                         + where + ")");
                 values.fail();

@@ -53,7 +53,8 @@ final class YamlReader {
         options.setMaxAliasesForCollections(50);
         options.setNestingDepthLimit(MAX_DEPTH + 10);
         options.setCodePointLimit(MAX_FILE_BYTES);
-        options.setAllowDuplicateKeys(false);
+        // Duplicate keys are found by readValue, which names both lines; SnakeYAML's check would not.
+        options.setAllowDuplicateKeys(true);
         options.setAllowRecursiveKeys(false);
         return YAMLFactory.builder()
                 .loaderOptions(options)
@@ -149,7 +150,34 @@ final class YamlReader {
         }
         decoder.flush(out);
         out.flip();
-        return out.toString();
+        String text = out.toString();
+        return printable(text) ? text : null;
+    }
+
+    /**
+     * Whether {@code text} holds only characters YAML 1.2 allows (section 5.1: tab, line breaks,
+     * printable Unicode); locates the first offender otherwise.
+     */
+    private boolean printable(String text) {
+        int line = 1;
+        int column = 1;
+        for (int i = 0; i < text.length(); i++) {
+            char c = text.charAt(i);
+            boolean allowed = c == '\t' || c == '\n' || c == '\r' || (c >= 0x20 && c <= 0x7E) || c == 0x85
+                    || (c >= 0xA0 && c <= 0xD7FF) || (c >= 0xE000 && c <= 0xFFFD) || Character.isSurrogate(c);
+            if (!allowed) {
+                problems.add(Problem.error(file, line, column, "", String.format(
+                        "control character U+%04X is not allowed in YAML; remove it", (int) c)));
+                return false;
+            }
+            if (c == '\n') {
+                line++;
+                column = 1;
+            } else {
+                column++;
+            }
+        }
+        return true;
     }
 
     private YamlNode readValue(YAMLParser parser, JsonToken token, int depth) throws IOException {
@@ -159,11 +187,11 @@ final class YamlReader {
         if (parser.isCurrentAlias()) {
             problems.add(Problem.error(file, line, column, "",
                     "aliases ('*" + parser.getText() + "') are not supported; write the value out"));
-            return new YamlNode.Scalar("", true, line, column);
+            throw new Abandon(); // one report is enough; an alias bomb has thousands
+
         }
         if (depth > MAX_DEPTH) {
             problems.add(Problem.error(file, line, column, "", "nested more than " + MAX_DEPTH + " levels deep"));
-            parser.skipChildren();
             throw new Abandon();
         }
         switch (token) {
@@ -225,6 +253,9 @@ final class YamlReader {
         String problem = marked.getProblem() == null ? "" : marked.getProblem();
         String context = marked.getContext() == null ? "" : " (" + marked.getContext() + ")";
         String message = "not readable as YAML: " + firstLine(problem + context);
+        if (context.contains("block")) {
+            message += "; check the indentation and the ': ' after each key";
+        }
         if (mark == null) {
             return Problem.error(file, 0, 0, "", message);
         }

@@ -5,12 +5,12 @@ import java.util.concurrent.Callable;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 
-/** The top-level {@code yoke} command: lists the sub-commands. */
+/** The top-level {@code yoke} command: the sub-commands, or the workbench on the demo when none is given. */
 @Command(name = "yoke",
         mixinStandardHelpOptions = true,
         versionProvider = VersionProvider.class,
         description = "Choose a brushed DC motor and the four switches of its PWM H-bridge for a duty profile.",
-        subcommands = {CheckCommand.class, RankCommand.class, ExplainCommand.class, BenchCommand.class})
+        subcommands = {CheckCommand.class, RankCommand.class, ExplainCommand.class, BenchCommand.class, OpenCommand.class})
 public final class YokeCommand implements Callable<Integer> {
 
     /** Exit status: results found. */
@@ -32,9 +32,9 @@ public final class YokeCommand implements Callable<Integer> {
         return cli;
     }
 
+    /** With no sub-command: the workbench on the demo scenario ({@code yoke open}). */
     @Override
     public Integer call() {
-        spec.commandLine().usage(spec.commandLine().getOut());
-        return OK;
+        return spec.commandLine().getSubcommands().get("open").execute();
     }
 }

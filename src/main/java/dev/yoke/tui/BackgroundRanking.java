@@ -1,9 +1,10 @@
 package dev.yoke.tui;
 
+import dev.yoke.engine.Shortlist;
 import dev.yoke.model.Catalog;
 import dev.yoke.model.Scenario;
+import java.util.concurrent.CancellationException;
 import java.util.concurrent.atomic.AtomicBoolean;
-import java.util.concurrent.atomic.AtomicLong;
 import java.util.concurrent.atomic.AtomicReference;
 
 /**
@@ -15,11 +16,10 @@ public final class BackgroundRanking {
     /** Where a run stands. */
     public enum State { RUNNING, DONE, CANCELLED, FAILED }
 
-    private final AtomicLong done = new AtomicLong();
-    private final AtomicLong total = new AtomicLong();
+    private volatile double fraction = Double.NaN;
     private final AtomicBoolean cancelled = new AtomicBoolean();
     private final AtomicReference<State> state = new AtomicReference<>(State.RUNNING);
-    private final AtomicReference<PairingTable> result = new AtomicReference<>();
+    private final AtomicReference<Shortlist> result = new AtomicReference<>();
     private final AtomicReference<String> failure = new AtomicReference<>();
     private final long startNanos = System.nanoTime();
     private volatile long endNanos;
@@ -28,9 +28,8 @@ public final class BackgroundRanking {
     private BackgroundRanking(WorkbenchBackend backend, Scenario scenario, Catalog catalog) {
         RankProgress progress = new RankProgress() {
             @Override
-            public void report(long d, long t) {
-                done.set(d);
-                total.set(t);
+            public void report(double f) {
+                fraction = f;
             }
 
             @Override
@@ -40,14 +39,14 @@ public final class BackgroundRanking {
         };
         thread = new Thread(() -> {
             try {
-                PairingTable table = backend.rank(scenario, catalog, progress);
+                Shortlist table = backend.rank(scenario, catalog, progress);
                 if (cancelled.get()) {
                     state.set(State.CANCELLED);
                 } else {
                     result.set(table);
                     state.set(State.DONE);
                 }
-            } catch (InterruptedException e) {
+            } catch (InterruptedException | CancellationException e) {
                 state.set(State.CANCELLED);
             } catch (Exception | StackOverflowError e) {
                 if (cancelled.get()) {
@@ -80,18 +79,9 @@ public final class BackgroundRanking {
         thread.interrupt();
     }
 
-    /** Fraction done in [0, 1], or NaN while the total is not known. */
+    /** Fraction done in [0, 1], or NaN before the first report. */
     public double fraction() {
-        long t = total.get();
-        return t <= 0 ? Double.NaN : Math.min(1.0, (double) done.get() / t);
-    }
-
-    public long done() {
-        return done.get();
-    }
-
-    public long total() {
-        return total.get();
+        return fraction;
     }
 
     /** Seconds since the start (or the run's length once finished). */
@@ -101,7 +91,7 @@ public final class BackgroundRanking {
     }
 
     /** The finished table; null unless {@link State#DONE}. */
-    public PairingTable result() {
+    public Shortlist result() {
         return result.get();
     }
 

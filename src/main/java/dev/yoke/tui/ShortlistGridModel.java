@@ -1,35 +1,48 @@
 package dev.yoke.tui;
 
 import dev.yoke.engine.Constraint;
+import dev.yoke.engine.Ranking;
+import dev.yoke.engine.Shortlist;
+import dev.yoke.model.Motor;
+import dev.yoke.model.PowerSwitch;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Set;
 
-/** The shortlist as a {@link GridModel}: one grid row per pairing of the current view order. */
+/** The shortlist as a {@link GridModel}: one grid row per pairing of the view order. */
 public final class ShortlistGridModel implements GridModel {
 
     private static final ShortlistColumn[] COLUMNS = ShortlistColumn.values();
     private static final int FROZEN = 3;
 
-    private final PairingTable table;
-    private final ShortlistContext context;
+    private final Shortlist shortlist;
     private final ViewSettings view;
     private final int[] order;
     private final Glyphs glyphs;
+    private final Set<String> suspects;
     private final List<GridColumn> columns;
 
-    public ShortlistGridModel(PairingTable table, ShortlistContext context, ViewSettings view, int[] order, Glyphs glyphs) {
-        this.table = table;
-        this.context = context;
+    /** Sorts and filters {@code shortlist} by {@code view} (through the engine's ranking). */
+    public static ShortlistGridModel of(Shortlist shortlist, ViewSettings view, Glyphs glyphs, Set<String> suspects) {
+        int[] order = shortlist == null ? new int[0] : Ranking.view(shortlist, view.sort(), view.filter());
+        return new ShortlistGridModel(shortlist, view, order, glyphs, suspects);
+    }
+
+    private ShortlistGridModel(Shortlist shortlist, ViewSettings view, int[] order, Glyphs glyphs, Set<String> suspects) {
+        this.shortlist = shortlist;
         this.view = view;
         this.order = order;
         this.glyphs = glyphs;
+        this.suspects = Set.copyOf(suspects);
         int motorWidth = 5;
-        for (var m : context.catalog().motors()) {
-            motorWidth = Math.max(motorWidth, m.id().length() + (context.isSuspect(m.id()) ? 1 : 0));
-        }
         int switchWidth = 6;
-        for (var s : context.catalog().switches()) {
-            switchWidth = Math.max(switchWidth, s.id().length() + (context.isSuspect(s.id()) ? 1 : 0));
+        if (shortlist != null) {
+            for (Motor m : shortlist.evaluator().catalog().motors()) {
+                motorWidth = Math.max(motorWidth, m.id().length() + (suspects.contains(m.id()) ? 1 : 0));
+            }
+            for (PowerSwitch s : shortlist.evaluator().catalog().switches()) {
+                switchWidth = Math.max(switchWidth, s.id().length() + (suspects.contains(s.id()) ? 1 : 0));
+            }
         }
         int bindingWidth = 7;
         for (Constraint c : Constraint.values()) {
@@ -47,8 +60,7 @@ public final class ShortlistGridModel implements GridModel {
             if (c != ShortlistColumn.FRONT) {
                 width = Math.max(width, c.title().length() + 3);
             }
-            String title = c == ShortlistColumn.FRONT ? String.valueOf(glyphs.paretoMark()) : c.title();
-            cols.add(new GridColumn(title, width, c.alignRight()));
+            cols.add(new GridColumn(c.heading(glyphs), width, c.alignRight()));
         }
         this.columns = List.copyOf(cols);
     }
@@ -63,32 +75,29 @@ public final class ShortlistGridModel implements GridModel {
         return column.ordinal();
     }
 
-    /** Table row shown at a grid row. */
-    public int tableRow(int gridRow) {
+    /** Shortlist row shown at a grid row. */
+    public int shortlistRow(int gridRow) {
         return order[gridRow];
     }
 
-    /** The grid row showing a table row, or -1 when the view hides it. */
-    public int gridRowOf(int tableRow) {
+    /** The grid row showing a shortlist row, or -1 when the view hides it. */
+    public int gridRowOf(int shortlistRow) {
         for (int i = 0; i < order.length; i++) {
-            if (order[i] == tableRow) {
+            if (order[i] == shortlistRow) {
                 return i;
             }
         }
         return -1;
     }
 
-    /** The view order (table rows) behind this grid: what the export writes. */
+    /** The view order (shortlist rows) behind this grid: what the export writes. */
     public int[] order() {
         return order.clone();
     }
 
-    public PairingTable table() {
-        return table;
-    }
-
-    public ShortlistContext context() {
-        return context;
+    /** The ranked pairings, or null before the first ranking finishes. */
+    public Shortlist shortlist() {
+        return shortlist;
     }
 
     public ViewSettings view() {
@@ -112,23 +121,21 @@ public final class ShortlistGridModel implements GridModel {
 
     @Override
     public String cell(int row, int column) {
-        return COLUMNS[column].cell(table, order[row], context, glyphs);
+        return COLUMNS[column].cell(shortlist, order[row], suspects, glyphs);
     }
 
     @Override
     public Tone tone(int row, int column) {
-        return COLUMNS[column].tone(table, order[row], context);
+        return COLUMNS[column].tone(shortlist, order[row], suspects);
     }
 
     @Override
     public String headerMark(int column) {
-        List<SortKey> sort = view.sort();
-        for (int i = 0; i < sort.size(); i++) {
-            if (sort.get(i).column() == COLUMNS[column]) {
-                char arrow = sort.get(i).descending() ? glyphs.descending() : glyphs.ascending();
-                return i == 0 ? " " + arrow : " " + arrow + "2";
-            }
+        int position = view.sortPosition(COLUMNS[column]);
+        if (position < 0) {
+            return "";
         }
-        return "";
+        char arrow = view.sort().get(position).descending() ? glyphs.descending() : glyphs.ascending();
+        return position == 0 ? " " + arrow : " " + arrow + (position + 1);
     }
 }

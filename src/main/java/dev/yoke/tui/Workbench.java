@@ -8,8 +8,8 @@ import com.googlecode.lanterna.gui2.WindowBasedTextGUI;
 import com.googlecode.lanterna.gui2.WindowListenerAdapter;
 import com.googlecode.lanterna.input.KeyStroke;
 import com.googlecode.lanterna.input.KeyType;
-import dev.yoke.engine.Metric;
 import dev.yoke.engine.PairingResult;
+import dev.yoke.engine.Shortlist;
 import dev.yoke.model.Catalog;
 import dev.yoke.model.Scenario;
 import java.nio.file.Files;
@@ -40,11 +40,9 @@ public final class Workbench {
     private Scenario scenario;
     private Catalog catalog;
     private Set<String> suspectIds;
-    private PairingTable table = PairingTable.EMPTY;
-    private ShortlistContext context;
+    private Shortlist shortlist;
     private ViewSettings view = ViewSettings.DEFAULT;
     private ShortlistGridModel gridModel;
-    private int feasibleCount;
 
     private BackgroundRanking ranking;
     private String message = "";
@@ -79,8 +77,7 @@ public final class Workbench {
         this.catalog = catalog;
         this.suspectIds = Set.copyOf(suspectIds);
         this.exportFolder = exportFolder;
-        this.context = new ShortlistContext(catalog, scenario, this.suspectIds);
-        this.gridModel = new ShortlistGridModel(table, context, view, new int[0], traits.glyphs());
+        this.gridModel = ShortlistGridModel.of(null, view, traits.glyphs(), this.suspectIds);
 
         grid = new GridComponent(gridModel, traits);
         grid.setSelectedColumn(ShortlistGridModel.indexOf(ShortlistColumn.BINDING_MARGIN));
@@ -210,23 +207,22 @@ public final class Workbench {
                 return true;
             }
             case DONE -> {
-                PairingTable result = ranking.result();
-                if (result != null && result != table) {
-                    table = result;
-                    context = new ShortlistContext(catalog, scenario, suspectIds);
-                    feasibleCount = countFeasible(table);
+                Shortlist result = ranking.result();
+                if (result != null && result != shortlist) {
+                    shortlist = result;
                     applyView(view, -1);
                     grid.setEmptyMessage("no pairing passes the filters (z clears them)");
-                    showMessage(String.format(Locale.ROOT, "ranked %d pairings in %.1f s", table.size(), ranking.seconds()));
+                    showMessage(String.format(Locale.ROOT, "ranked %d pairings in %.1f s", shortlist.evaluatedCount(),
+                            ranking.seconds()));
                     return true;
                 }
                 return false;
             }
             case CANCELLED, FAILED -> {
                 String text = ranking.state() == BackgroundRanking.State.CANCELLED
-                        ? "ranking stopped" + (table.size() > 0 ? "; showing the previous results" : "")
+                        ? "ranking stopped" + (shortlist != null ? "; showing the previous results" : "")
                         : "ranking failed: " + ranking.failure();
-                if (table.size() == 0) {
+                if (shortlist == null) {
                     grid.setEmptyMessage(text + " (r ranks again)");
                 }
                 showMessage(text);
@@ -240,29 +236,18 @@ public final class Workbench {
         }
     }
 
-    private static int countFeasible(PairingTable t) {
-        int n = 0;
-        for (int r = 0; r < t.size(); r++) {
-            if (t.value(r, Metric.FEASIBLE) >= 0.5) {
-                n++;
-            }
-        }
-        return n;
-    }
-
     /** Re-sorts and re-filters; keeps the cursor on the same pairing when it stays visible. */
-    private void applyView(ViewSettings newView, int keepTableRow) {
+    private void applyView(ViewSettings newView, int keepRow) {
         view = newView;
-        int[] order = ViewOrder.compute(table, context, view);
-        gridModel = new ShortlistGridModel(table, context, view, order, traits.glyphs());
-        int cursor = keepTableRow >= 0 ? gridModel.gridRowOf(keepTableRow) : -1;
+        gridModel = ShortlistGridModel.of(shortlist, view, traits.glyphs(), suspectIds);
+        int cursor = keepRow >= 0 ? gridModel.gridRowOf(keepRow) : -1;
         grid.setModel(gridModel);
         grid.setCursorRow(Math.max(0, cursor));
         statusBar.invalidate();
     }
 
-    private int cursorTableRow() {
-        return gridModel.rowCount() == 0 ? -1 : gridModel.tableRow(grid.getCursorRow());
+    private int cursorRow() {
+        return gridModel.rowCount() == 0 ? -1 : gridModel.shortlistRow(grid.getCursorRow());
     }
 
     private ShortlistColumn selectedColumn() {
@@ -276,13 +261,15 @@ public final class Workbench {
         }
         switch (action) {
             case OPEN_DETAIL -> openDetail();
-            case SORT -> applyView(view.sortedBy(selectedColumn()), cursorTableRow());
-            case SORT_SECOND -> applyView(view.thenSortedBy(selectedColumn()), cursorTableRow());
-            case FEASIBLE_ONLY -> applyView(view.withFeasibleOnly(!view.feasibleOnly()), cursorTableRow());
-            case PARETO_ONLY -> applyView(view.withParetoOnly(!view.paretoOnly()), cursorTableRow());
-            case CLEAR_FILTERS -> applyView(view.withoutFilters(), cursorTableRow());
-            case FIND -> ask("find in part ids and labels: ", view.text(), text -> {
-                applyView(view.withText(text), cursorTableRow());
+            case SORT -> applyView(view.sortedBy(selectedColumn()), cursorRow());
+            case SORT_SECOND -> applyView(view.thenSortedBy(selectedColumn()), cursorRow());
+            case FEASIBLE_ONLY -> applyView(view.withFilter(view.filter().withFeasibleOnly(!view.filter().feasibleOnly())),
+                    cursorRow());
+            case PARETO_ONLY -> applyView(view.withFilter(view.filter().withParetoOnly(!view.filter().paretoOnly())),
+                    cursorRow());
+            case CLEAR_FILTERS -> applyView(view.withoutFilters(), cursorRow());
+            case FIND -> ask("find in part ids and labels: ", view.filter().text(), text -> {
+                applyView(view.withFilter(view.filter().withText(text)), cursorRow());
                 return null;
             });
             case THRESHOLD -> askThreshold();
@@ -341,7 +328,7 @@ public final class Workbench {
 
     private void askThreshold() {
         ShortlistColumn column = selectedColumn().isMargin() ? selectedColumn() : ShortlistColumn.BINDING_MARGIN;
-        Double current = view.thresholds().get(column);
+        Double current = view.threshold(column);
         String initial = current == null ? "" : Cells.fixed(current * 100, 1);
         ask("keep " + column.title() + " >= (percent, empty removes): ", initial, text -> {
             String t = text.strip();
@@ -349,12 +336,12 @@ public final class Workbench {
                 t = t.substring(0, t.length() - 1).strip();
             }
             if (t.isEmpty()) {
-                applyView(view.withThreshold(column, Double.NaN), cursorTableRow());
+                applyView(view.withThreshold(column, Double.NaN), cursorRow());
                 return null;
             }
             try {
                 double percent = Double.parseDouble(t);
-                applyView(view.withThreshold(column, percent / 100.0), cursorTableRow());
+                applyView(view.withThreshold(column, percent / 100.0), cursorRow());
                 return null;
             } catch (NumberFormatException e) {
                 return "expected a percentage such as 5 or -10, got '" + text + "'";
@@ -380,7 +367,7 @@ public final class Workbench {
                 return file.getFileName() + " exists: Enter again replaces it, Esc keeps it";
             }
             try {
-                backend.writeCsv(file, table, context, gridModel.order());
+                backend.writeCsv(file, shortlist, gridModel.order(), view);
             } catch (Exception e) {
                 return "could not write " + file.getFileName() + ": " + e.getMessage();
             }
@@ -390,19 +377,18 @@ public final class Workbench {
     }
 
     private void openDetail() {
-        int row = cursorTableRow();
+        int row = cursorRow();
         if (row < 0) {
             return;
         }
         PairingResult result;
         try {
-            result = backend.explain(scenario, catalog, table.motorIndex(row), table.switchIndex(row),
-                    table.frequencyIndex(row), table.ratioIndex(row));
+            result = shortlist.explain(row);
         } catch (RuntimeException e) {
             showMessage("could not explain this pairing: " + e.getMessage());
             return;
         }
-        Scenario shown = scenario;
+        Scenario shown = shortlist.evaluator().scenario();
         String title = "Pairing detail: " + result.motor().id() + " with " + result.powerSwitch().id()
                 + " at " + Cells.engineering(result.pwmFrequency(), "Hz") + ", gear " + Cells.number(result.gearRatio());
         openPage(title, w -> DetailReport.lines(result, shown, traits, w), KeyMap.View.DETAIL);
@@ -461,13 +447,13 @@ public final class Workbench {
     }
 
     private String statusText(int width) {
-        String counts = table.size() == 0 && ranking != null && ranking.state() == BackgroundRanking.State.RUNNING
+        String counts = shortlist == null
                 ? "ranking"
-                : String.format(Locale.ROOT, "%d shown / %d total / %d feasible", gridModel.rowCount(), table.size(), feasibleCount);
+                : String.format(Locale.ROOT, "%d shown / %d total / %d feasible", gridModel.rowCount(), shortlist.size(),
+                        shortlist.feasibleCount());
         String filters = view.describeFilters();
-        String text = " " + scenario.name() + " | " + counts + " | sort " + view.describeSort()
-                + (filters.isEmpty() ? "" : " | only " + filters);
-        return text;
+        return " " + scenario.name() + " | " + counts + (filters.isEmpty() ? "" : " | only " + filters)
+                + " | sort " + view.describeSort();
     }
 
     private String messageText(int width) {
@@ -484,9 +470,15 @@ public final class Workbench {
             double f = ranking.fraction();
             String percent = Double.isNaN(f) ? "" : String.format(Locale.ROOT, " %.0f%%", 100 * f);
             String bar = Double.isNaN(f) ? "" : " " + DetailReport.bar(f, 20, traits.glyphs());
-            return String.format(Locale.ROOT, " ranking%s%s  %d of %d pairings, %.1f s  (Esc stops)",
-                    percent, bar, ranking.done(), ranking.total(), ranking.seconds());
+            return String.format(Locale.ROOT, " ranking%s%s  %d pairings, %.1f s  (Esc stops)",
+                    percent, bar, pairingCount(), ranking.seconds());
         }
         return " " + message;
+    }
+
+    /** Pairings a ranking of the current scenario and catalog evaluates. */
+    private long pairingCount() {
+        return (long) catalog.motors().size() * catalog.switches().size()
+                * scenario.bench().pwmFrequencies().size() * scenario.bench().gearRatios().size();
     }
 }

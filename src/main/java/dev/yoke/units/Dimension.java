@@ -45,7 +45,7 @@ public enum Dimension {
     SPEED_CONSTANT("a speed constant", "rpm per volt", "rpm/V", "rpm/V", null, false, 0, 0,
             "rad/s/V", "1", false,
             u("rpm/V", Math.PI / 30), u("rad/s/V", "1"), u("(rad/s)/V", "1"), u("rad/(sV)", "1")),
-    ANGULAR_SPEED("a speed", "revolutions per minute", "rpm", "rpm", null, false, 0, 0,
+    ANGULAR_SPEED("a speed", "radians per second", "rpm", "rpm", null, false, 0, 0,
             "rad/s", "1", false,
             u("rad/s", "1"), p("rpm", Math.PI / 30), u("r/min", Math.PI / 30), u("rps", 2 * Math.PI),
             u("deg/s", Math.PI / 180), u("°/s", Math.PI / 180)),
@@ -56,9 +56,9 @@ public enum Dimension {
             "kg*m^2", "1", false,
             u("kgm2", "1"), u("kgcm2", "1e-4"), u("kgmm2", "1e-6"), u("gcm2", "1e-7"), u("gmm2", "1e-9")),
     MASS("a mass", "kilograms", "g", "g", "1e-3", true, -3, 3, "g", "1e-3", true, p("g", "1e-3")),
-    DIMENSIONLESS("a plain ratio", "a plain number", "", "", "1", false, 0, 0, "", "1", false,
+    DIMENSIONLESS("a plain ratio", "a ratio", "", "", "1", false, 0, 0, "", "1", false,
             u("%", "0.01")),
-    PRICE("a price", "a plain number in the catalog's currency", "", "", "1", false, 0, 0, "", "1", false);
+    PRICE("a price", "the catalog's currency (a plain number)", "", "", "1", false, 0, 0, "", "1", false);
 
     private final String noun;
     private final String unitName;
@@ -136,6 +136,11 @@ public enum Dimension {
         return exactSymbol;
     }
 
+    /** The unit a plain number (no unit written) is read in: the SI unit, °C for temperatures. */
+    public String plainUnit() {
+        return this == MASS ? "kg" : exactSymbol;
+    }
+
     /** How the expected unit is named in messages, e.g. "ohms (Ω, Ohm)". */
     public String expectation() {
         StringBuilder forms = new StringBuilder();
@@ -163,7 +168,7 @@ public enum Dimension {
             case INERTIA -> List.of("kg*m^2", "g*cm^2");
             case MASS -> List.of("kg", "g");
             case TIME -> List.of("s", "ms", "min", "h");
-            case DIMENSIONLESS -> List.of("plain", "%");
+            case DIMENSIONLESS -> List.of("e.g. 0.95 or 95 %");
             case PRICE -> List.of();
             default -> List.of(symbol);
         };

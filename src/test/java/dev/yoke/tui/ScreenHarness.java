@@ -21,13 +21,13 @@ final class ScreenHarness implements AutoCloseable {
     final TerminalScreen screen;
     final MultiWindowTextGUI gui;
     final Workbench workbench;
-    final Fixtures.FakeBackend backend;
+    final Fixtures.TestBackend backend;
 
     ScreenHarness(int columns, int rows, TerminalTraits traits, Path exportFolder) throws IOException {
-        this(columns, rows, traits, exportFolder, new Fixtures.FakeBackend(6, 5), Set.of());
+        this(columns, rows, traits, exportFolder, new Fixtures.TestBackend(6, 5), Set.of());
     }
 
-    ScreenHarness(int columns, int rows, TerminalTraits traits, Path exportFolder, Fixtures.FakeBackend backend,
+    ScreenHarness(int columns, int rows, TerminalTraits traits, Path exportFolder, Fixtures.TestBackend backend,
             Set<String> suspects) throws IOException {
         terminal = new DefaultVirtualTerminal(new TerminalSize(columns, rows));
         screen = new TerminalScreen(terminal);

@@ -107,4 +107,28 @@ class SmallPartsTest {
                 () -> assertEquals("+12.5%", Cells.signedPercent(0.125)),
                 () -> assertEquals("-", Cells.number(Double.NaN)));
     }
+
+    @Test
+    void sortKeyPressesReverseAndKeepTheSecondKey() {
+        ViewSettings cost = ViewSettings.DEFAULT.sortedBy(ShortlistColumn.COST);
+        assertEquals(1, cost.sort().size(), "the three-key default is replaced");
+        assertFalse(cost.sort().get(0).descending(), "cost: smallest first");
+        assertTrue(cost.sortedBy(ShortlistColumn.COST).sort().get(0).descending(), "again: reversed");
+        ViewSettings two = cost.thenSortedBy(ShortlistColumn.EFFICIENCY);
+        assertEquals(2, two.sort().size());
+        assertTrue(two.sort().get(1).descending(), "efficiency: largest first");
+        assertEquals(2, two.sortedBy(ShortlistColumn.MOTOR).sort().size(), "a new first key keeps the second");
+        assertEquals(two, two.thenSortedBy(ShortlistColumn.COST), "the first key cannot also be second");
+        assertEquals("cost asc, eff% desc", two.describeSort());
+    }
+
+    @Test
+    void thresholdsOnlyOnMarginsAndRemovable() {
+        ViewSettings v = ViewSettings.DEFAULT.withThreshold(ShortlistColumn.MARGIN_JUNCTION, 0.1);
+        assertEquals(0.1, v.threshold(ShortlistColumn.MARGIN_JUNCTION));
+        assertEquals("m:Tj>=+10.0%", v.describeFilters());
+        assertEquals("", v.withThreshold(ShortlistColumn.MARGIN_JUNCTION, Double.NaN).describeFilters());
+        assertTrue(ShortlistColumn.BINDING_MARGIN.isMargin());
+        assertFalse(ShortlistColumn.COST.isMargin());
+    }
 }

@@ -10,6 +10,8 @@ import com.googlecode.lanterna.SGR;
 import com.googlecode.lanterna.input.KeyStroke;
 import com.googlecode.lanterna.input.KeyType;
 import dev.yoke.engine.Metric;
+import dev.yoke.engine.PairingResult;
+import dev.yoke.engine.Shortlist;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
@@ -60,20 +62,20 @@ class WorkbenchTest {
         try (ScreenHarness h = new ScreenHarness(100, 30, TerminalTraits.PLAIN, dir).ranked()) {
             selectColumn(h, ShortlistColumn.COST);
             String before = h.line(2);
-            h.press(key('s'));
+            h.press(key('s')).press(KeyType.Home);
             ShortlistGridModel m = h.workbench.gridModel();
-            double first = m.table().value(m.tableRow(0), Metric.COST);
-            double last = m.table().value(m.tableRow(m.rowCount() - 1), Metric.COST);
+            double first = m.shortlist().value(m.shortlistRow(0), Metric.COST);
+            double last = m.shortlist().value(m.shortlistRow(m.rowCount() - 1), Metric.COST);
             String header = h.line(1);
-            int costAt = columnStart(header, "cost");
-            String firstCell = h.line(2).substring(costAt, Math.min(100, costAt + 8)).strip();
+            int costEnd = columnStart(header, "cost ^") + "cost ^".length();
+            String firstCell = h.line(2).substring(costEnd - 8, costEnd).strip();
             assertAll(
                     () -> assertTrue(first <= last, "ascending"),
                     () -> assertEquals(Cells.fixed(first, 2), firstCell, "the screen's first row shows the smallest cost"),
                     () -> assertTrue(header.contains("cost ^"), header),
                     () -> assertNotEquals(before, h.line(2), "the first row changed"));
             h.press(key('s'));
-            double firstAfter = h.workbench.gridModel().table().value(h.workbench.gridModel().tableRow(0), Metric.COST);
+            double firstAfter = h.workbench.gridModel().shortlist().value(h.workbench.gridModel().shortlistRow(0), Metric.COST);
             assertAll(
                     () -> assertEquals(last, firstAfter, "reversed: the most expensive first"),
                     () -> assertTrue(h.line(1).contains("cost v"), h.line(1)));
@@ -89,10 +91,12 @@ class WorkbenchTest {
             h.press(key('S'));
             ShortlistGridModel m = h.workbench.gridModel();
             for (int i = 1; i < m.rowCount(); i++) {
-                int a = m.tableRow(i - 1);
-                int b = m.tableRow(i);
-                if (m.table().motorIndex(a) == m.table().motorIndex(b)) {
-                    assertTrue(m.table().value(a, Metric.COST) <= m.table().value(b, Metric.COST), "cost ascends within a motor");
+                int a = m.shortlistRow(i - 1);
+                int b = m.shortlistRow(i);
+                Shortlist s = m.shortlist();
+                assertTrue(s.motorId(a).compareTo(s.motorId(b)) <= 0, "motor ids ascend");
+                if (s.motorIndex(a) == s.motorIndex(b)) {
+                    assertTrue(s.value(a, Metric.COST) <= s.value(b, Metric.COST), "cost ascends within a motor");
                 }
             }
             assertTrue(h.line(0).contains("sort motor asc, cost asc"), h.line(0));
@@ -103,12 +107,14 @@ class WorkbenchTest {
     @Test
     void feasibleFilterHidesFailingRows() throws Exception {
         try (ScreenHarness h = new ScreenHarness(100, 30, TerminalTraits.PLAIN, dir).ranked()) {
+            h.press(KeyType.End);
             assertTrue(h.text().contains("FAIL"), "some pairings fail before filtering");
             h.press(key('f'));
             String screen = h.text();
             int shown = h.workbench.gridModel().rowCount();
             assertAll(
                     () -> assertFalse(screen.contains("FAIL"), screen),
+                    () -> assertEquals(h.workbench.gridModel().shortlist().feasibleCount(), shown),
                     () -> assertTrue(shown > 0 && shown < 180),
                     () -> assertTrue(h.line(0).contains(shown + " shown / 180 total / " + shown + " feasible"), h.line(0)),
                     () -> assertTrue(h.line(0).contains("only feasible"), h.line(0)));
@@ -123,6 +129,7 @@ class WorkbenchTest {
             h.press(key('p'));
             int shown = h.workbench.gridModel().rowCount();
             assertTrue(shown > 0 && shown < 180);
+            assertEquals(h.workbench.gridModel().shortlist().paretoCount(), shown);
             for (int row = 2; row < 2 + Math.min(shown, 20); row++) {
                 assertEquals('*', h.line(row).charAt(0), "every row shown carries the Pareto mark: " + h.line(row));
             }
@@ -148,9 +155,10 @@ class WorkbenchTest {
             ShortlistGridModel m = h.workbench.gridModel();
             assertTrue(m.rowCount() > 0 && m.rowCount() < 180);
             for (int i = 0; i < m.rowCount(); i++) {
-                assertTrue(m.table().value(m.tableRow(i), Metric.MARGIN_JUNCTION) >= 0.2);
+                assertTrue(m.shortlist().value(m.shortlistRow(i), Metric.MARGIN_JUNCTION) >= 0.2);
             }
-            assertTrue(h.line(0).contains("m:Tj>=+20.0%"), h.line(0));
+            assertEquals("m:Tj>=+20.0%", h.workbench.view().describeFilters());
+            assertTrue(h.line(0).contains(m.rowCount() + " shown"), h.line(0));
         }
     }
 
@@ -167,22 +175,27 @@ class WorkbenchTest {
     @Test
     void detailShowsTheBindingMarginMarkedAndGoesBack() throws Exception {
         try (ScreenHarness h = new ScreenHarness(100, 30, TerminalTraits.PLAIN, dir).ranked()) {
+            h.press(KeyType.End);
+            ShortlistGridModel m = h.workbench.gridModel();
+            PairingResult expected = m.shortlist().explain(m.shortlistRow(m.rowCount() - 1));
+            assertFalse(expected.feasible(), "the last row of the default order fails");
             h.press(KeyType.Enter);
             String screen = h.text();
-            String bindingLine = screen.lines().filter(l -> l.contains("junction temperature") && l.contains("violated"))
-                    .findFirst().orElse("");
+            String title = expected.binding().title();
+            String bindingLine = screen.lines().filter(l -> l.strip().startsWith(">")).findFirst().orElse("");
             assertAll(
-                    () -> assertTrue(h.line(0).contains("Pairing detail"), h.line(0)),
-                    () -> assertTrue(screen.contains("binding: junction temperature, margin -12.3%"), screen),
-                    () -> assertTrue(bindingLine.strip().startsWith(">"), "binding margin marked: " + bindingLine),
-                    () -> assertTrue(bindingLine.contains("violated") && bindingLine.contains("binding"), bindingLine),
-                    () -> assertTrue(screen.contains("FAIL"), "the verdict is a word"));
+                    () -> assertTrue(h.line(0).contains("Pairing detail: " + expected.motor().id()), h.line(0)),
+                    () -> assertTrue(screen.contains("FAIL"), "the verdict is a word"),
+                    () -> assertTrue(screen.contains("binding: " + title + ", margin "
+                            + Cells.signedPercent(expected.bindingMargin())), screen),
+                    () -> assertTrue(bindingLine.contains(title), "the marked margin is the binding one: " + bindingLine),
+                    () -> assertTrue(bindingLine.contains("violated") && bindingLine.endsWith("binding"), bindingLine));
             h.press(KeyType.PageDown).press(KeyType.PageDown);
             String lower = h.text();
             assertAll(
                     () -> assertTrue(lower.contains("Losses per switch"), lower),
-                    () -> assertTrue(lower.contains("PWM frequency is audible"), lower),
-                    () -> assertTrue(lower.contains("I rms A"), "current plot"));
+                    () -> assertTrue(lower.contains("Advisories"), lower),
+                    () -> assertTrue(lower.contains("I rms A") && lower.contains("Tw C"), "current and temperature plots"));
             h.press(KeyType.Escape);
             assertTrue(h.line(0).contains("shown /"), "back on the shortlist: " + h.line(0));
         }
@@ -200,7 +213,7 @@ class WorkbenchTest {
             h.resize(160, 50);
             assertAll(
                     () -> assertTrue(h.line(49).contains("? help") && h.line(49).contains("b bench"), h.line(49)),
-                    () -> assertTrue(h.line(1).contains("Tw C"), "more columns fit at 160: " + h.line(1)),
+                    () -> assertTrue(h.line(1).contains("eff%"), "more columns fit at 160: " + h.line(1)),
                     () -> assertTrue(h.line(47).contains("mo-"), "more rows fit at 50: " + h.line(47)));
         }
     }
@@ -225,8 +238,10 @@ class WorkbenchTest {
     void monochromeStillMarksVerdictsAndCursor() throws Exception {
         TerminalTraits mono = new TerminalTraits(ColorDepth.MONOCHROME, false);
         try (ScreenHarness h = new ScreenHarness(100, 30, mono, dir).ranked()) {
-            String screen = h.text();
-            assertTrue(screen.contains(" ok ") && screen.contains("FAIL"), "verdicts are words");
+            assertTrue(h.text().contains(" ok "), "verdicts are words");
+            h.press(KeyType.End);
+            assertTrue(h.text().contains("FAIL"), "verdicts are words");
+            h.press(KeyType.Home);
             assertTrue(h.at(5, 2).getModifiers().contains(SGR.REVERSE), "cursor row in reverse video");
             assertFalse(h.at(5, 3).getModifiers().contains(SGR.REVERSE), "other rows not reversed");
             h.press(KeyType.ArrowDown);
@@ -238,14 +253,14 @@ class WorkbenchTest {
     void unicodeTerminalsGetUnicodeMarks() throws Exception {
         TerminalTraits utf = new TerminalTraits(ColorDepth.INDEXED_256, true);
         try (ScreenHarness h = new ScreenHarness(100, 30, utf, dir).ranked()) {
-            assertTrue(h.line(1).contains("margin \u25BC"), h.line(1));
+            assertTrue(h.line(1).contains("verdict \u25BC"), h.line(1));
             assertTrue(h.text().contains("\u2502"), "column rule");
         }
     }
 
     @Test
     void implausiblePartsCarryAMark() throws Exception {
-        try (ScreenHarness h = new ScreenHarness(100, 30, TerminalTraits.PLAIN, dir, new Fixtures.FakeBackend(6, 5),
+        try (ScreenHarness h = new ScreenHarness(100, 30, TerminalTraits.PLAIN, dir, new Fixtures.TestBackend(6, 5),
                 Set.of("sw-a")).ranked()) {
             h.press(key('/')).type("sw-a").press(KeyType.Enter);
             assertTrue(h.line(2).contains("!sw-a"), h.line(2));
@@ -286,8 +301,14 @@ class WorkbenchTest {
             List<String> lines = Files.readAllLines(csv);
             ShortlistGridModel m = h.workbench.gridModel();
             assertEquals(m.rowCount() + 1, lines.size(), "a heading and one line per row shown");
-            String firstId = m.context().motor(m.table().motorIndex(m.tableRow(0))).id();
-            assertTrue(lines.get(1).startsWith(firstId + ","), lines.get(1));
+            Shortlist s = m.shortlist();
+            for (int i = 0; i < m.rowCount(); i++) {
+                String[] cells = lines.get(i + 1).split(",");
+                assertEquals(String.valueOf(i + 1), cells[0], "rank column");
+                assertEquals(s.motorId(m.shortlistRow(i)), cells[1], "motor of row " + i);
+                assertEquals(s.switchId(m.shortlistRow(i)), cells[3], "switch of row " + i);
+            }
+            assertTrue(lines.get(0).startsWith("rank,motor,"), lines.get(0));
             assertTrue(h.line(h.rows() - 2).contains("wrote " + m.rowCount() + " rows"), h.line(h.rows() - 2));
         }
     }
@@ -318,10 +339,10 @@ class WorkbenchTest {
 
     @Test
     void longRankingShowsProgressAndEscStopsIt() throws Exception {
-        Fixtures.FakeBackend backend = new Fixtures.FakeBackend(6, 5);
+        Fixtures.TestBackend backend = new Fixtures.TestBackend(6, 5);
         backend.hold = new CountDownLatch(1);
         try (ScreenHarness h = new ScreenHarness(100, 30, TerminalTraits.PLAIN, dir, backend, Set.of())) {
-            for (int i = 0; i < 200 && h.workbench.ranking().total() == 0; i++) {
+            for (int i = 0; i < 200 && Double.isNaN(h.workbench.ranking().fraction()); i++) {
                 Thread.sleep(5);
             }
             h.update();

@@ -35,7 +35,7 @@ public final class FieldForm extends AbstractInteractableComponent<FieldForm> {
 
     private static final int VALUE_WIDTH = 18;
 
-    private final List<FieldSpec> fields;
+    private final List<FormField> fields;
     private final List<FormRule> rules;
     private final List<LineEditor> editors = new ArrayList<>();
     private final Map<String, String> problems = new LinkedHashMap<>();
@@ -55,13 +55,13 @@ public final class FieldForm extends AbstractInteractableComponent<FieldForm> {
      * @param rules       cross-field checks
      * @param visibleRows lines the form takes on screen; longer forms scroll
      */
-    public FieldForm(List<FieldSpec> fields, List<FormRule> rules, int visibleRows) {
+    public FieldForm(List<FormField> fields, List<FormRule> rules, int visibleRows) {
         this.fields = List.copyOf(fields);
         this.rules = List.copyOf(rules);
         this.visibleRows = Math.max(1, visibleRows);
         int lw = 4;
         int uw = 0;
-        for (FieldSpec f : this.fields) {
+        for (FormField f : this.fields) {
             editors.add(new LineEditor(""));
             lw = Math.max(lw, TerminalTextUtils.getColumnWidth(f.key()));
             uw = Math.max(uw, TerminalTextUtils.getColumnWidth(f.unit()));
@@ -142,7 +142,7 @@ public final class FieldForm extends AbstractInteractableComponent<FieldForm> {
 
     /** Text for a status line: the selected field's problem, or what it expects. */
     public synchronized String selectedStatus() {
-        FieldSpec f = fields.get(selected);
+        FormField f = fields.get(selected);
         String problem = problems.get(f.key());
         if (problem != null) {
             return f.key() + ": " + problem;
@@ -166,7 +166,7 @@ public final class FieldForm extends AbstractInteractableComponent<FieldForm> {
         problems.clear();
         validValues.clear();
         for (int i = 0; i < fields.size(); i++) {
-            FieldSpec f = fields.get(i);
+            FormField f = fields.get(i);
             try {
                 validValues.put(f.key(), f.read(editors.get(i).text()));
             } catch (IllegalArgumentException e) {
@@ -175,12 +175,12 @@ public final class FieldForm extends AbstractInteractableComponent<FieldForm> {
         }
         Map<String, String> ruleProblems = new LinkedHashMap<>();
         for (FormRule rule : rules) {
-            rule.check(validValues).ifPresent(p -> ruleProblems.putIfAbsent(p.getKey(), p.getValue()));
+            rule.check(validValues).forEach(ruleProblems::putIfAbsent);
         }
         if (!ruleProblems.isEmpty()) {
             // keep field order in the problem list
             Map<String, String> ordered = new LinkedHashMap<>();
-            for (FieldSpec f : fields) {
+            for (FormField f : fields) {
                 String m = problems.containsKey(f.key()) ? problems.get(f.key()) : ruleProblems.get(f.key());
                 if (m != null) {
                     ordered.put(f.key(), m);
@@ -293,7 +293,7 @@ public final class FieldForm extends AbstractInteractableComponent<FieldForm> {
             default:
                 break;
         }
-        FieldSpec field = fields.get(selected);
+        FormField field = fields.get(selected);
         LineEditor editor = editors.get(selected);
         if (field.isChoice()) {
             int step = 0;
@@ -396,7 +396,7 @@ public final class FieldForm extends AbstractInteractableComponent<FieldForm> {
 
         private static void drawLine(TextGUIGraphics g, FieldForm form, int i, int line, int width,
                                      boolean messageBelow) {
-            FieldSpec f = form.fields.get(i);
+            FormField f = form.fields.get(i);
             boolean current = i == form.selected;
             String problem = form.problems.get(f.key());
             g.applyThemeStyle(form.getThemeDefinition().getNormal());

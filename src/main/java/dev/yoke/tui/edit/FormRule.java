@@ -1,7 +1,8 @@
 package dev.yoke.tui.edit;
 
+import java.util.LinkedHashMap;
 import java.util.Map;
-import java.util.Optional;
+import java.util.function.Function;
 
 /**
  * A check across fields of one form (e.g. a peak current not below the continuous one).
@@ -10,30 +11,40 @@ import java.util.Optional;
 @FunctionalInterface
 public interface FormRule {
 
-    /** @return the field to mark and the message, or empty when the rule holds */
-    Optional<Map.Entry<String, String>> check(Map<String, Object> validValues);
+    /** @return field key to message for each field the rule finds wrong; empty when it holds */
+    Map<String, String> check(Map<String, Object> validValues);
 
     /** {@code key} must be ≥ {@code otherKey}; the message names the other field. */
     static FormRule notBelow(String key, String otherKey) {
-        return values -> {
-            Object value = values.get(key);
-            Object other = values.get(otherKey);
-            if (value instanceof Double v && other instanceof Double o && v < o) {
-                return Optional.of(Map.entry(key, "must be ≥ " + otherKey));
-            }
-            return Optional.empty();
-        };
+        return values -> values.get(key) instanceof Double v && values.get(otherKey) instanceof Double o && v < o
+                ? Map.of(key, "must be ≥ " + otherKey) : Map.of();
     }
 
     /** {@code key} must be ≤ {@code otherKey}; the message names the other field. */
     static FormRule notAbove(String key, String otherKey) {
+        return values -> values.get(key) instanceof Double v && values.get(otherKey) instanceof Double o && v > o
+                ? Map.of(key, "must be ≤ " + otherKey) : Map.of();
+    }
+
+    /**
+     * A rule on the whole record: once every field is valid, the record is built and {@code issues}
+     * lists its problems (as the loader would report them) by field.
+     *
+     * @param keys   the fields the record needs
+     * @param build  field values to record
+     * @param issues record to field key and message
+     */
+    static <T> FormRule onRecord(java.util.Collection<String> keys, Function<Map<String, Object>, T> build,
+                                 Function<T, Map<String, String>> issues) {
         return values -> {
-            Object value = values.get(key);
-            Object other = values.get(otherKey);
-            if (value instanceof Double v && other instanceof Double o && v > o) {
-                return Optional.of(Map.entry(key, "must be ≤ " + otherKey));
+            if (!values.keySet().containsAll(keys)) {
+                return Map.of();
             }
-            return Optional.empty();
+            try {
+                return new LinkedHashMap<>(issues.apply(build.apply(values)));
+            } catch (RuntimeException e) {
+                return Map.of();
+            }
         };
     }
 }

@@ -31,7 +31,7 @@ final class PartForm extends BasicWindow {
 
     private final WindowBasedTextGUI gui;
     private final PartsEditor editor;
-    private final PartKind<Object> kind;
+    private final EditablePart<Object> kind;
     private final String replacedId;
     private final List<Path> files;
     private final FieldForm form;
@@ -41,7 +41,7 @@ final class PartForm extends BasicWindow {
     private final Label state = new Label("");
     private String message = "";
 
-    private PartForm(WindowBasedTextGUI gui, PartsEditor editor, PartKind<Object> kind, Map<String, Object> values,
+    private PartForm(WindowBasedTextGUI gui, PartsEditor editor, EditablePart<Object> kind, Map<String, Object> values,
                      String replacedId, List<Path> files, Set<String> takenIds) {
         super(kind.noun());
         this.gui = gui;
@@ -50,26 +50,25 @@ final class PartForm extends BasicWindow {
         this.replacedId = replacedId;
         this.files = List.copyOf(files);
         setHints(List.of(Window.Hint.FULL_SCREEN, Window.Hint.NO_DECORATIONS));
-        List<FieldSpec> fields = new ArrayList<>();
+        List<FormField> fields = new ArrayList<>();
         if (replacedId == null) {
             List<String> names = this.files.stream().map(Path::toString).toList();
-            fields.add(FieldSpec.choice(FILE, names, name -> name, String::valueOf));
+            fields.add(FormField.choice(FILE, names, name -> name, String::valueOf));
         }
         fields.addAll(kind.fields());
         List<FormRule> rules = new ArrayList<>(kind.rules());
-        rules.add(v -> takenIds.contains(v.get("id"))
-                ? Optional.of(Map.entry("id", "already used by another part")) : Optional.empty());
+        rules.add(v -> takenIds.contains(v.get("id")) ? Map.of("id", "already used by another part") : Map.of());
         int rows = Math.max(4, gui.getScreen().getTerminalSize().getRows() - 4);
         form = new FieldForm(fields, rules, rows);
         if (replacedId == null) {
             form.setText(FILE, this.files.get(0).toString());
         }
-        for (FieldSpec f : kind.fields()) {
+        for (FormField f : kind.fields()) {
             if (values.containsKey(f.key())) {
                 form.setValue(f.key(), values.get(f.key()));
             }
         }
-        for (FieldSpec f : fields) {
+        for (FormField f : fields) {
             initialTexts.put(f.key(), form.text(f.key()));
         }
         if (replacedId == null) {
@@ -94,7 +93,7 @@ final class PartForm extends BasicWindow {
      * @param files      for an edit, the part's file; for a new part, the files offered, default first
      * @param takenIds   ids the part may not take
      */
-    static PartForm open(WindowBasedTextGUI gui, PartsEditor editor, PartKind<Object> kind, Map<String, Object> values,
+    static PartForm open(WindowBasedTextGUI gui, PartsEditor editor, EditablePart<Object> kind, Map<String, Object> values,
                          String replacedId, List<Path> files, Set<String> takenIds) {
         PartForm window = new PartForm(gui, editor, kind, values, replacedId, files, takenIds);
         gui.addWindow(window);

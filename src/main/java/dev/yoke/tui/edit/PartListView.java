@@ -16,7 +16,7 @@ final class PartListView extends AbstractComponent<PartListView> {
 
     private static final int ID_WIDTH = 16;
 
-    private PartKind<Object> kind;
+    private EditablePart<Object> kind;
     private List<Object> parts = List.of();
     private int selected;
     private int top;
@@ -26,7 +26,7 @@ final class PartListView extends AbstractComponent<PartListView> {
         this.rows = Math.max(2, rows);
     }
 
-    synchronized void show(PartKind<Object> kind, List<Object> parts, int selected) {
+    synchronized void show(EditablePart<Object> kind, List<Object> parts, int selected) {
         this.kind = kind;
         this.parts = List.copyOf(parts);
         this.selected = selected;
@@ -73,13 +73,13 @@ final class PartListView extends AbstractComponent<PartListView> {
             v.rows = height;
         }
         int valuesWidth = 0;
-        for (PartKind.Column<Object> c : v.kind.columns()) {
+        for (EditablePart.Column<Object> c : v.kind.columns()) {
             valuesWidth += c.width() + 1;
         }
         int labelWidth = Math.max(8, width - 2 - ID_WIDTH - 1 - valuesWidth);
         StringBuilder head = new StringBuilder("  ").append(pad("id", ID_WIDTH)).append(' ')
                 .append(pad("label", labelWidth));
-        for (PartKind.Column<Object> c : v.kind.columns()) {
+        for (EditablePart.Column<Object> c : v.kind.columns()) {
             head.append(' ').append(padLeft(c.header(), c.width()));
         }
         g.putString(0, 0, TerminalTextUtils.fitString(head.toString(), width));
@@ -95,7 +95,7 @@ final class PartListView extends AbstractComponent<PartListView> {
             StringBuilder b = new StringBuilder(i == v.selected ? "> " : "  ")
                     .append(pad(v.kind.id(part), ID_WIDTH)).append(' ')
                     .append(pad(v.kind.label(part), labelWidth));
-            for (PartKind.Column<Object> c : v.kind.columns()) {
+            for (EditablePart.Column<Object> c : v.kind.columns()) {
                 b.append(' ').append(padLeft(c.value().apply(part), c.width()));
             }
             if (i == v.selected) {

@@ -45,7 +45,7 @@ public final class PartsEditor extends BasicWindow {
     private final Label title = new Label("");
     private final Label status = new Label("");
     private final Label keys = new Label("");
-    private PartKind<Object> kind = kind(MotorKind.INSTANCE);
+    private EditablePart<Object> kind = kind(MotorEditing.INSTANCE);
     private String filter = "";
     private boolean filtering;
     private int selected;
@@ -82,8 +82,8 @@ public final class PartsEditor extends BasicWindow {
     }
 
     @SuppressWarnings("unchecked")
-    private static PartKind<Object> kind(PartKind<?> k) {
-        return (PartKind<Object>) k;
+    private static EditablePart<Object> kind(EditablePart<?> k) {
+        return (EditablePart<Object>) k;
     }
 
     /** Ids of the parts the list shows now (after the filter), in order. */
@@ -114,7 +114,7 @@ public final class PartsEditor extends BasicWindow {
         shown = out;
         selected = Math.max(0, Math.min(selected, shown.size() - 1));
         list.show(kind, shown, selected);
-        boolean motors = kind == kind(MotorKind.INSTANCE);
+        boolean motors = kind == kind(MotorEditing.INSTANCE);
         int motorCount = store.catalog().motors().size();
         int switchCount = store.catalog().switches().size();
         String tabs = motors
@@ -194,7 +194,7 @@ public final class PartsEditor extends BasicWindow {
                 return true;
             case Tab:
             case ReverseTab:
-                kind = kind == kind(MotorKind.INSTANCE) ? kind(SwitchKind.INSTANCE) : kind(MotorKind.INSTANCE);
+                kind = kind == kind(MotorEditing.INSTANCE) ? kind(SwitchEditing.INSTANCE) : kind(MotorEditing.INSTANCE);
                 selected = 0;
                 return true;
             case Enter:

@@ -12,6 +12,8 @@ import com.googlecode.lanterna.input.KeyStroke;
 import com.googlecode.lanterna.input.KeyType;
 import dev.yoke.model.Scenario;
 import dev.yoke.model.Segment;
+import dev.yoke.units.Dimension;
+import dev.yoke.units.Units;
 
 import java.io.IOException;
 import java.nio.file.Path;
@@ -179,7 +181,7 @@ public final class ScenarioEditor extends BasicWindow {
             }
         }
         heading.setText("PROFILE SEGMENTS  " + table.size() + " segments"
-                + (segments.isPresent() ? ", cycle " + Quantities.SECONDS.format(cycle) : ""));
+                + (segments.isPresent() ? ", cycle " + Units.format(cycle, Dimension.TIME) : ""));
         boolean inTable = getFocusedInteractable() == table;
         status.setText(inTable ? table.selectedStatus() : form.selectedStatus());
         String problems = summary();

@@ -1,5 +1,10 @@
 package dev.yoke.tui.edit;
 
+import dev.yoke.catalog.FieldSpec;
+import dev.yoke.catalog.FieldType;
+import dev.yoke.catalog.PartFields;
+import dev.yoke.catalog.PartKind;
+import dev.yoke.catalog.PartRules;
 import dev.yoke.model.Bench;
 import dev.yoke.model.Limits;
 import dev.yoke.model.Modulation;
@@ -8,7 +13,6 @@ import dev.yoke.model.Scenario;
 import dev.yoke.model.Segment;
 
 import java.util.ArrayList;
-import java.util.Arrays;
 import java.util.List;
 import java.util.Map;
 
@@ -39,35 +43,28 @@ final class ScenarioFields {
     static final String LOAD_INERTIA = "load_inertia";
     static final String REPEAT = "repeat";
 
-    static List<FieldSpec> fields() {
-        List<String> schemes = Arrays.stream(Modulation.values()).map(Modulation::fileName).toList();
-        return List.of(
-                FieldSpec.text(NAME, false),
-                FieldSpec.quantity(BUS, Quantities.VOLTS, FieldCheck.POSITIVE),
-                FieldSpec.quantity(BUS_MIN, Quantities.VOLTS, FieldCheck.POSITIVE),
-                FieldSpec.quantity(BUS_MAX, Quantities.VOLTS, FieldCheck.POSITIVE),
-                FieldSpec.quantityList(FREQUENCIES, Quantities.HERTZ, FieldCheck.POSITIVE),
-                FieldSpec.choice(MODULATION, schemes, Modulation::fromFileName, m -> ((Modulation) m).fileName()),
-                FieldSpec.quantity(DEAD_TIME, Quantities.SECONDS, FieldCheck.NOT_NEGATIVE),
-                FieldSpec.quantity(DRIVE_VOLTAGE, Quantities.VOLTS, FieldCheck.POSITIVE),
-                FieldSpec.quantity(GATE_RESISTANCE, Quantities.OHMS, FieldCheck.NOT_NEGATIVE),
-                FieldSpec.quantity(MAX_DUTY, Quantities.FRACTION, FieldCheck.FRACTION),
-                FieldSpec.quantity(AMBIENT, Quantities.CELSIUS, FieldCheck.between(-60, 150, "-60…150 °C")),
-                FieldSpec.quantity(RTH_CASE_AMBIENT, Quantities.KELVIN_PER_WATT, FieldCheck.POSITIVE),
-                FieldSpec.quantityList(RATIOS, Quantities.NUMBER, FieldCheck.POSITIVE),
-                FieldSpec.quantity(GEAR_EFFICIENCY, Quantities.FRACTION, FieldCheck.FRACTION),
-                FieldSpec.quantity(VDS_DERATING, Quantities.FRACTION, FieldCheck.FRACTION),
-                FieldSpec.quantity(JUNCTION_LIMIT, Quantities.CELSIUS, FieldCheck.between(0, 250, "0…250 °C")),
-                FieldSpec.quantity(WINDING_MARGIN, Quantities.KELVIN, FieldCheck.NOT_NEGATIVE),
-                FieldSpec.quantity(RIPPLE, Quantities.FRACTION, FieldCheck.POSITIVE),
-                FieldSpec.quantity(LOAD_INERTIA, Quantities.KILOGRAM_SQUARE_METRES, FieldCheck.NOT_NEGATIVE),
-                FieldSpec.choice(REPEAT, List.of("yes", "no"), "yes"::equals, r -> (Boolean) r ? "yes" : "no"));
+    /** Name, bench, limits and the profile's scalars, read as the scenario loader reads them. */
+    static List<FormField> fields() {
+        List<FormField> out = new ArrayList<>();
+        out.add(FormField.of(PartKind.SCENARIO, NAME));
+        for (FieldSpec f : PartFields.of(PartKind.BENCH)) {
+            if (f.type() != FieldType.SECTION) {
+                out.add(FormField.of(f));
+            }
+        }
+        for (FieldSpec f : PartFields.of(PartKind.LIMITS)) {
+            out.add(FormField.of(f));
+        }
+        out.add(FormField.of(PartKind.PROFILE, LOAD_INERTIA));
+        out.add(FormField.of(PartKind.PROFILE, REPEAT));
+        return out;
     }
 
+    /** The loader's checks across bench fields (bus voltages in order, dead time shorter than a period…). */
     static List<FormRule> rules() {
-        return List.of(
-                FormRule.notBelow(BUS, BUS_MIN),
-                FormRule.notAbove(BUS, BUS_MAX));
+        List<String> keys = fields().stream().map(FormField::key).toList();
+        return List.of(FormRule.onRecord(keys, ScenarioFields::bench,
+                b -> MotorEditing.issues(PartRules.benchErrors(b))));
     }
 
     static void fill(FieldForm form, Scenario s) {
@@ -95,15 +92,19 @@ final class ScenarioFields {
         form.setValue(REPEAT, s.profile().repeat());
     }
 
-    @SuppressWarnings("unchecked")
     static Scenario build(Map<String, Object> v, List<Segment> segments) {
+        Profile profile = new Profile(d(v, LOAD_INERTIA), (Boolean) v.get(REPEAT), segments);
+        return new Scenario((String) v.get(NAME), bench(v), profile);
+    }
+
+    @SuppressWarnings("unchecked")
+    static Bench bench(Map<String, Object> v) {
         Limits limits = new Limits(d(v, VDS_DERATING), d(v, JUNCTION_LIMIT), d(v, WINDING_MARGIN), d(v, RIPPLE));
         Bench bench = new Bench(d(v, BUS), d(v, BUS_MIN), d(v, BUS_MAX),
                 new ArrayList<>((List<Double>) v.get(FREQUENCIES)), (Modulation) v.get(MODULATION),
                 d(v, DEAD_TIME), d(v, DRIVE_VOLTAGE), d(v, GATE_RESISTANCE), d(v, MAX_DUTY), d(v, AMBIENT),
                 d(v, RTH_CASE_AMBIENT), new ArrayList<>((List<Double>) v.get(RATIOS)), d(v, GEAR_EFFICIENCY), limits);
-        Profile profile = new Profile(d(v, LOAD_INERTIA), (Boolean) v.get(REPEAT), segments);
-        return new Scenario((String) v.get(NAME), bench, profile);
+        return bench;
     }
 
     private static double d(Map<String, Object> v, String key) {

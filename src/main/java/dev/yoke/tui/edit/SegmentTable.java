@@ -9,6 +9,7 @@ import com.googlecode.lanterna.gui2.InteractableRenderer;
 import com.googlecode.lanterna.gui2.TextGUIGraphics;
 import com.googlecode.lanterna.input.KeyStroke;
 import com.googlecode.lanterna.input.KeyType;
+import dev.yoke.catalog.PartKind;
 import dev.yoke.model.Segment;
 
 import java.util.ArrayList;
@@ -28,12 +29,12 @@ import java.util.function.Consumer;
 public final class SegmentTable extends AbstractInteractableComponent<SegmentTable> {
 
     /** The columns, in order: their specs give the keys, units and checks. */
-    public static final List<FieldSpec> COLUMNS = List.of(
-            FieldSpec.text("label", false),
-            FieldSpec.quantity("duration", Quantities.SECONDS, FieldCheck.POSITIVE),
-            FieldSpec.quantity("speed_start", Quantities.RADIANS_PER_SECOND, FieldCheck.ANY),
-            FieldSpec.quantity("speed_end", Quantities.RADIANS_PER_SECOND, FieldCheck.ANY),
-            FieldSpec.quantity("torque", Quantities.NEWTON_METRES, FieldCheck.ANY));
+    public static final List<FormField> COLUMNS = List.of(
+            FormField.of(PartKind.SEGMENT, "label"),
+            FormField.of(PartKind.SEGMENT, "duration"),
+            FormField.of(PartKind.SEGMENT, "speed_start"),
+            FormField.of(PartKind.SEGMENT, "speed_end"),
+            FormField.of(PartKind.SEGMENT, "torque"));
     private static final int[] WIDTHS = {14, 11, 14, 14, 14};
     private static final int ROW_MARK = 2;
     private static final int NUMBER = 3;
@@ -143,7 +144,7 @@ public final class SegmentTable extends AbstractInteractableComponent<SegmentTab
         if (rows.isEmpty()) {
             return "no segments: a or Insert adds one";
         }
-        FieldSpec spec = COLUMNS.get(column);
+        FormField spec = COLUMNS.get(column);
         String p = problem(row, column);
         String where = "segment " + (row + 1) + " " + spec.key();
         if (p != null) {
@@ -402,7 +403,7 @@ public final class SegmentTable extends AbstractInteractableComponent<SegmentTab
                 g.fill(' ');
                 g.putString(ROW_MARK, 0, " # ");
                 for (int c = 0; c < COLUMNS.size(); c++) {
-                    FieldSpec spec = COLUMNS.get(c);
+                    FormField spec = COLUMNS.get(c);
                     g.putString(columnX(c) + 1, 0, TerminalTextUtils.fitString(spec.key().replace('_', ' '), WIDTHS[c] - 1));
                 }
                 if (t.rows.isEmpty()) {

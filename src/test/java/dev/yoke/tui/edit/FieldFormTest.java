@@ -2,6 +2,7 @@ package dev.yoke.tui.edit;
 
 import com.googlecode.lanterna.gui2.BasicWindow;
 import com.googlecode.lanterna.input.KeyType;
+import dev.yoke.catalog.PartKind;
 import org.junit.jupiter.api.Test;
 
 import java.util.ArrayList;
@@ -17,9 +18,9 @@ class FieldFormTest {
 
     private static FieldForm resistorForm() {
         return new FieldForm(List.of(
-                FieldSpec.quantity("resistance", Quantities.OHMS, FieldCheck.POSITIVE),
-                FieldSpec.quantity("continuous_current", Quantities.AMPERES, FieldCheck.POSITIVE),
-                FieldSpec.quantity("peak_current", Quantities.AMPERES, FieldCheck.POSITIVE)),
+                FormField.of(PartKind.MOTOR, "resistance"),
+                FormField.of(PartKind.MOTOR, "continuous_current"),
+                FormField.of(PartKind.MOTOR, "peak_current")),
                 List.of(FormRule.notBelow("peak_current", "continuous_current")), 10);
     }
 
@@ -102,10 +103,11 @@ class FieldFormTest {
 
     @Test
     void listFieldReadsCommaSeparatedQuantities() {
-        FieldSpec frequencies = FieldSpec.quantityList("pwm_frequencies", Quantities.HERTZ, FieldCheck.POSITIVE);
+        FormField frequencies = FormField.of(PartKind.BENCH, "pwm_frequencies");
         assertEquals(List.of(16000.0, 20000.0, 40000.0), frequencies.read("16 kHz, 20 kHz, 40kHz"));
         IllegalArgumentException e = org.junit.jupiter.api.Assertions.assertThrows(IllegalArgumentException.class,
                 () -> frequencies.read("16 kHz, 20 kV"));
-        assertTrue(e.getMessage().startsWith("item 2: expected hertz"), e.getMessage());
+        assertTrue(e.getMessage().startsWith("expected hertz"), e.getMessage());
+        assertTrue(e.getMessage().contains("20 kV"), e.getMessage());
     }
 }

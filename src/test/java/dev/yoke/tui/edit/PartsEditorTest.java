@@ -82,7 +82,7 @@ class PartsEditorTest {
         try (TerminalDriver t = new TerminalDriver(80, 24)) {
             open(t, store);
             t.press(KeyType.Enter).press(KeyType.ArrowDown, 9).clearField(12).type("3 A");
-            assertTrue(t.lineWithNext("peak_current").contains("must be ≥ continuous_current"), t.text());
+            assertTrue(t.lineWithNext("peak_current").contains("is below continuous_current 4.00 A"), t.text());
             t.press(KeyType.F2);
             assertTrue(store.applied.isEmpty());
         }
@@ -146,8 +146,8 @@ class PartsEditorTest {
             Motor m = DemoParts.motor("m36-new", "new 36 V", 0.5);
             t.press(KeyType.ArrowDown).type(m.id());
             t.press(KeyType.ArrowDown).type(m.label());
-            for (FieldSpec f : MotorKind.INSTANCE.fields().subList(2, MotorKind.INSTANCE.fields().size())) {
-                t.press(KeyType.ArrowDown).clearField(30).type(f.write(MotorKind.INSTANCE.values(m).get(f.key())));
+            for (FormField f : MotorEditing.INSTANCE.fields().subList(2, MotorEditing.INSTANCE.fields().size())) {
+                t.press(KeyType.ArrowDown).clearField(30).type(f.write(MotorEditing.INSTANCE.values(m).get(f.key())));
             }
             t.press(KeyType.F2);
             PartChange.Put put = (PartChange.Put) store.applied.get(0);

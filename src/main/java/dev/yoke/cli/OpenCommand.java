@@ -1,0 +1,142 @@
+package dev.yoke.cli;
+
+import dev.yoke.catalog.CatalogFile;
+import dev.yoke.catalog.CatalogLoader;
+import dev.yoke.catalog.InputException;
+import dev.yoke.catalog.LoadedCatalog;
+import dev.yoke.catalog.LoadedScenario;
+import dev.yoke.catalog.Problem;
+import dev.yoke.catalog.ScenarioLoader;
+import dev.yoke.model.Scenario;
+import dev.yoke.tui.ColorDepth;
+import dev.yoke.tui.EditorHooks;
+import dev.yoke.tui.EngineBackend;
+import dev.yoke.tui.TerminalSession;
+import dev.yoke.tui.TerminalTraits;
+import dev.yoke.tui.Workbench;
+import dev.yoke.tui.edit.ScenarioEditor;
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.Callable;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+
+/**
+ * {@code yoke open}: the full-screen workbench on a scenario and a catalog. Refuses to start
+ * (exit 2, one line pointing to the batch command) where there is no interactive terminal.
+ */
+@Command(name = "open",
+        mixinStandardHelpOptions = true,
+        description = "Open the terminal workbench: the ranked shortlist, pairing details, export.")
+public final class OpenCommand implements Callable<Integer> {
+
+    /** The scenario opened when none is named. */
+    public static final String DEMO = "demo-data/rover-wheel.yaml";
+
+    /** Colour choices for {@code --colors}. */
+    enum Colors { auto, mono, basic, full }
+
+    @Parameters(paramLabel = "SCENARIO", arity = "0..1", defaultValue = DEMO,
+            description = "Scenario file (default: ${DEFAULT-VALUE}).")
+    Path scenarioFile;
+
+    @Option(names = "--catalog", paramLabel = "DIR", defaultValue = "catalog",
+            description = "Catalog folder: every *.yaml file in it (default: ${DEFAULT-VALUE}).")
+    Path catalogDir;
+
+    @Option(names = "--colors", paramLabel = "MODE", defaultValue = "auto",
+            description = "auto (from TERM, COLORTERM, NO_COLOR), mono, basic (16) or full (256). Default: ${DEFAULT-VALUE}.")
+    Colors colors;
+
+    @Option(names = "--ascii", description = "Draw lines and marks in ASCII even when the locale says UTF-8.")
+    boolean ascii;
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        PrintWriter err = spec.commandLine().getErr();
+        Map<String, String> env = System.getenv();
+        String why = TerminalSession.whyNotInteractive(System.console() != null, env);
+        if (why != null) {
+            err.println("yoke open: " + why + "; the workbench needs a terminal. For scripts use 'yoke rank'.");
+            return YokeCommand.BAD_INPUT;
+        }
+        LoadedCatalog catalog;
+        LoadedScenario scenario;
+        List<Problem> problems = new ArrayList<>();
+        try {
+            catalog = CatalogLoader.load(catalogDir);
+        } catch (InputException e) {
+            problems.addAll(e.problems());
+            catalog = null;
+        }
+        try {
+            scenario = ScenarioLoader.load(scenarioFile);
+        } catch (InputException e) {
+            problems.addAll(e.problems());
+            scenario = null;
+        }
+        if (catalog == null || scenario == null) {
+            for (Problem p : problems) {
+                err.println(p);
+            }
+            err.flush();
+            return YokeCommand.BAD_INPUT;
+        }
+        TerminalTraits traits = TerminalTraits.fromEnvironment(env);
+        switch (colors) {
+            case mono -> traits = traits.withColorDepth(ColorDepth.MONOCHROME);
+            case basic -> traits = traits.withColorDepth(ColorDepth.SIXTEEN);
+            case full -> traits = traits.withColorDepth(ColorDepth.INDEXED_256);
+            default -> { }
+        }
+        if (ascii) {
+            traits = traits.withUnicode(false);
+        }
+        List<Path> files = new ArrayList<>();
+        for (CatalogFile f : catalog.files()) {
+            files.add(f.path());
+        }
+        EngineBackend backend = new EngineBackend(VersionProvider.version(), scenarioFile, files);
+        Scenario start = scenario.scenario();
+        LoadedCatalog parts = catalog;
+        TerminalTraits chosen = traits;
+        try {
+            TerminalSession.run(chosen, gui -> {
+                Workbench workbench = new Workbench(gui, chosen, backend, start, parts.catalog(), parts.implausibleIds(),
+                        Path.of("").toAbsolutePath());
+                workbench.setEditors(editors());
+                return workbench;
+            });
+        } catch (IOException e) {
+            err.println("yoke open: could not use the terminal: " + e.getMessage() + ". For scripts use 'yoke rank'.");
+            return YokeCommand.BAD_INPUT;
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+        }
+        return YokeCommand.OK;
+    }
+
+    /** The editors behind the workbench's edit keys. */
+    private EditorHooks editors() {
+        return new EditorHooks() {
+            @Override
+            public void openParts(Workbench workbench) {
+                workbench.showMessage("the parts editor needs the catalog store, which this build does not have yet");
+            }
+
+            @Override
+            public void openBench(Workbench workbench) {
+                ScenarioEditor.open(workbench.gui(), workbench.scenario(), scenarioFile, workbench::scenarioChanged);
+            }
+        };
+    }
+}

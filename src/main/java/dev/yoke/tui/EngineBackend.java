@@ -1,0 +1,76 @@
+package dev.yoke.tui;
+
+import dev.yoke.engine.DriveEvaluator;
+import dev.yoke.engine.Shortlist;
+import dev.yoke.engine.Sweep;
+import dev.yoke.engine.SweepOptions;
+import dev.yoke.model.Catalog;
+import dev.yoke.model.Scenario;
+import dev.yoke.report.Meta;
+import dev.yoke.report.ShortlistCsvWriter;
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
+import java.time.Instant;
+import java.util.HexFormat;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * The real backend: the drive evaluator swept on every core, and the shortlist CSV writer with a
+ * sidecar naming the input files (path, SHA-256, size, time) so an export can be reproduced.
+ */
+public final class EngineBackend implements WorkbenchBackend {
+
+    private final String version;
+    private final Path scenarioFile;
+    private final List<Path> catalogFiles;
+
+    /**
+     * @param version      the running Yoke version, for the export sidecar
+     * @param scenarioFile the scenario file, or null when the scenario was made in memory
+     * @param catalogFiles the catalog files read
+     */
+    public EngineBackend(String version, Path scenarioFile, List<Path> catalogFiles) {
+        this.version = version;
+        this.scenarioFile = scenarioFile;
+        this.catalogFiles = List.copyOf(catalogFiles);
+    }
+
+    @Override
+    public Shortlist rank(Scenario scenario, Catalog catalog, RankProgress progress) {
+        SweepOptions options = SweepOptions.DEFAULT.withProgress(progress::report).withCancel(progress::isCancelled);
+        return Sweep.run(DriveEvaluator.of(scenario, catalog), options);
+    }
+
+    @Override
+    public void writeCsv(Path file, Shortlist shortlist, int[] order, ViewSettings view) throws IOException {
+        Map<String, String> options = new LinkedHashMap<>();
+        options.put("sort", view.describeSort());
+        options.put("filter", view.describeFilters().isEmpty() ? "none" : view.describeFilters());
+        List<Meta.SourceFile> catalogs = new java.util.ArrayList<>();
+        for (Path p : catalogFiles) {
+            catalogs.add(sourceFile(p));
+        }
+        Meta meta = new Meta(version, Instant.now(), scenarioFile == null ? null : sourceFile(scenarioFile), catalogs,
+                List.of(), options);
+        ShortlistCsvWriter.write(shortlist, order, file, meta);
+    }
+
+    /** A file as it is now: path as given, SHA-256 of its bytes, size and modification time. */
+    static Meta.SourceFile sourceFile(Path path) throws IOException {
+        byte[] bytes = Files.readAllBytes(path);
+        try {
+            String digest = HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(bytes));
+            return new Meta.SourceFile(path.toString(), digest, bytes.length,
+                    Files.getLastModifiedTime(path).toInstant());
+        } catch (NoSuchAlgorithmException e) {
+            // Every Java platform must provide SHA-256 (java.security.MessageDigest specification).
+            throw new UncheckedIOException(new IOException(e));
+        }
+    }
+}

@@ -1,0 +1,122 @@
+package dev.yoke.tui.edit;
+
+import dev.yoke.catalog.FieldResult;
+import dev.yoke.catalog.FieldSpec;
+import dev.yoke.catalog.PartFields;
+import dev.yoke.catalog.PartKind;
+import dev.yoke.model.Modulation;
+import dev.yoke.units.Dimension;
+import dev.yoke.units.Units;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import java.util.Objects;
+import java.util.function.Function;
+
+/**
+ * One editable field of a form: its name (the file's key), the unit shown beside it, how its
+ * text is read into a value and written back, and, for a field with fixed options, those options.
+ *
+ * @param key          name shown in the form; the key used in the files
+ * @param unit         unit shown beside the field, empty for plain text
+ * @param reader       text to value; throws {@link IllegalArgumentException} whose message is shown
+ * @param writer       value to text, read back exactly by {@code reader}
+ * @param choices      fixed options cycled with Space or Left/Right; empty for typed fields
+ * @param emptyValue   value taken when the text is blank; {@code null} makes the field required
+ */
+public record FormField(
+        String key,
+        String unit,
+        Function<String, Object> reader,
+        Function<Object, String> writer,
+        List<String> choices,
+        Object emptyValue) {
+
+    public FormField {
+        Objects.requireNonNull(key, "key");
+        Objects.requireNonNull(reader, "reader");
+        Objects.requireNonNull(writer, "writer");
+        unit = unit == null ? "" : unit;
+        choices = List.copyOf(choices);
+    }
+
+    /** Free text; required unless {@code optional}. The value is the trimmed string. */
+    public static FormField text(String key, boolean optional) {
+        return new FormField(key, "", String::trim, String::valueOf, List.of(), optional ? "" : null);
+    }
+
+    /** One of fixed words; the value is {@code toValue} of the chosen word. */
+    public static FormField choice(String key, List<String> words, Function<String, Object> toValue,
+                                   Function<Object, String> toWord) {
+        return new FormField(key, "", toValue, toWord, words, null);
+    }
+
+    /**
+     * The form field for a key of the catalog's field table, so that a field is read exactly as the
+     * loader reads the file: same units, same range, same messages. Quantities are written with
+     * {@link Units#formatExact}, so a field left alone gives back the very same value.
+     * A key whose default is derived from another key (e.g. {@code bus_voltage_min}) is required here.
+     */
+    public static FormField of(FieldSpec spec) {
+        Function<String, Object> reader = text -> {
+            FieldResult r = spec.validate(text);
+            if (!r.ok()) {
+                throw new IllegalArgumentException(r.message());
+            }
+            return r.value();
+        };
+        Object whenBlank = spec.required() ? null : spec.defaultValue();
+        return switch (spec.type()) {
+            case QUANTITY -> new FormField(spec.key(), unitOf(spec.dimension()), reader,
+                    v -> Units.formatExact((Double) v, spec.dimension()), List.of(), whenBlank);
+            case QUANTITY_LIST -> new FormField(spec.key(), unitOf(spec.dimension()), reader, v -> {
+                List<String> parts = new ArrayList<>();
+                for (Object item : (List<?>) v) {
+                    parts.add(Units.formatExact((Double) item, spec.dimension()));
+                }
+                return String.join(", ", parts);
+            }, List.of(), null);
+            case BOOLEAN -> new FormField(spec.key(), "", reader, String::valueOf, List.of("true", "false"), null);
+            case MODULATION -> new FormField(spec.key(), "", reader, v -> ((Modulation) v).fileName(),
+                    Arrays.stream(Modulation.values()).map(Modulation::fileName).toList(), null);
+            case IDENTIFIER, TEXT -> new FormField(spec.key(), "", reader, String::valueOf, List.of(), whenBlank);
+            case SECTION, SECTION_LIST -> throw new IllegalArgumentException(spec.key() + " is a section");
+        };
+    }
+
+    /** The catalog's field for {@code key} of {@code kind}, as a form field. */
+    public static FormField of(PartKind kind, String key) {
+        return of(PartFields.find(kind, key).orElseThrow(() -> new IllegalArgumentException(kind + " has no " + key)));
+    }
+
+    /** The unit shown beside a field: the symbol its text is written in. */
+    static String unitOf(Dimension d) {
+        return d == Dimension.ANGULAR_SPEED ? "rad/s" : d.symbol();
+    }
+
+    /** Whether the field is cycled through options rather than typed. */
+    public boolean isChoice() {
+        return !choices.isEmpty();
+    }
+
+    /**
+     * Reads the field's text.
+     *
+     * @throws IllegalArgumentException naming what is wrong
+     */
+    public Object read(String text) {
+        if (text == null || text.isBlank()) {
+            if (emptyValue != null) {
+                return emptyValue;
+            }
+            throw new IllegalArgumentException("required");
+        }
+        return reader.apply(text);
+    }
+
+    /** Writes a value as the field's text. */
+    public String write(Object value) {
+        return value == null ? "" : writer.apply(value);
+    }
+}
