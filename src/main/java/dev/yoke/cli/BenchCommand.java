@@ -34,37 +34,37 @@ import picocli.CommandLine.Model.CommandSpec;
  */
 @Command(name = "bench", mixinStandardHelpOptions = true,
         description = {"Measure evaluation speed, re-ranking time and memory on synthetic parts.",
-                "Run under a small heap to check the memory claim: YOKE_JAVA_OPTS=-Xmx512m ./yoke bench"})
+                "Check the memory claim under a small heap:", "  YOKE_JAVA_OPTS=-Xmx512m ./yoke bench"})
 public final class BenchCommand implements Callable<Integer> {
 
     @Spec
     CommandSpec spec;
 
-    @Option(names = "--motors", description = "Synthetic motors for the throughput run (default: ${DEFAULT-VALUE}).")
+    @Option(names = "--motors", paramLabel = "N", description = "Synthetic motors for the throughput run (default: ${DEFAULT-VALUE}).")
     int motors = 200;
 
-    @Option(names = "--switches", description = "Synthetic switches for the throughput run (default: ${DEFAULT-VALUE}).")
+    @Option(names = "--switches", paramLabel = "N", description = "Synthetic switches for the throughput run (default: ${DEFAULT-VALUE}).")
     int switches = 2000;
 
-    @Option(names = "--segments", description = "Segments of the repeating profile (default: ${DEFAULT-VALUE}).")
+    @Option(names = "--segments", paramLabel = "N", description = "Segments of the repeating profile (default: ${DEFAULT-VALUE}).")
     int segments = 10;
 
-    @Option(names = "--frequencies", description = "PWM frequencies on the bench (default: ${DEFAULT-VALUE}).")
+    @Option(names = "--frequencies", paramLabel = "K", description = "PWM frequencies on the bench (default: ${DEFAULT-VALUE}).")
     int frequencies = 3;
 
-    @Option(names = "--ratios", description = "Gear ratios on the bench (default: ${DEFAULT-VALUE}).")
+    @Option(names = "--ratios", paramLabel = "K", description = "Gear ratios on the bench (default: ${DEFAULT-VALUE}).")
     int ratios = 3;
 
-    @Option(names = "--seconds", description = "Measuring time of the throughput run, s (default: ${DEFAULT-VALUE}).")
+    @Option(names = "--seconds", paramLabel = "S", description = "Measuring time of the throughput run, s (default: ${DEFAULT-VALUE}).")
     double seconds = 5;
 
-    @Option(names = "--threads", description = "Worker threads; 0 = one per core (default: ${DEFAULT-VALUE}).")
+    @Option(names = "--threads", paramLabel = "T", description = "Worker threads; 0 = one per core (default: ${DEFAULT-VALUE}).")
     int threads = 0;
 
-    @Option(names = "--seed", description = "Seed of the synthetic parts (default: ${DEFAULT-VALUE}).")
+    @Option(names = "--seed", paramLabel = "SEED", description = "Seed of the synthetic parts (default: ${DEFAULT-VALUE}).")
     long seed = 1;
 
-    @Option(names = "--skip", split = ",", description = "Parts to skip: throughput, rerank, memory.")
+    @Option(names = "--skip", paramLabel = "PART", split = ",", description = "Parts to skip: throughput, rerank, memory.")
     List<String> skip = new ArrayList<>();
 
     @Override
