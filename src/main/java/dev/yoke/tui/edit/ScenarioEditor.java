@@ -55,6 +55,7 @@ public final class ScenarioEditor extends BasicWindow {
     private Scenario passedOn;
     private Scenario saved;
     private String message = "";
+    private boolean unicode = true;
 
     private ScenarioEditor(WindowBasedTextGUI gui, Scenario scenario, Path file, Consumer<Scenario> onChange,
                            ScenarioSaver saver) {
@@ -175,7 +176,7 @@ public final class ScenarioEditor extends BasicWindow {
 
     private void refresh() {
         String name = form.text(ScenarioFields.NAME);
-        title.setText("SCENARIO " + name + "   file " + (file == null ? "(none)" : file.toString()));
+        show(title, "SCENARIO " + name + "   file " + (file == null ? "(none)" : file.toString()));
         double cycle = 0;
         Optional<List<Segment>> segments = table.segments();
         if (segments.isPresent()) {
@@ -183,20 +184,20 @@ public final class ScenarioEditor extends BasicWindow {
                 cycle += seg.duration();
             }
         }
-        heading.setText("PROFILE SEGMENTS  " + table.size() + " segments"
+        show(heading, "PROFILE SEGMENTS  " + table.size() + " segments"
                 + (segments.isPresent() ? ", cycle " + Units.format(cycle, Dimension.TIME) : ""));
         boolean inTable = getFocusedInteractable() == table;
-        status.setText(inTable ? table.selectedStatus() : form.selectedStatus());
+        show(status, inTable ? table.selectedStatus() : form.selectedStatus());
         String problems = summary();
         String fileState = Objects.equals(current().orElse(null), saved) ? "file up to date" : "unsaved (F2 saves)";
         if (!message.isEmpty()) {
-            state.setText(message);
+            show(state, message);
         } else if (problems.isEmpty()) {
-            state.setText("All values valid, passed to the ranking; " + fileState + ".");
+            show(state, "All values valid, passed to the ranking; " + fileState + ".");
         } else {
-            state.setText("NOT passed on: " + problems);
+            show(state, "NOT passed on: " + problems);
         }
-        keys.setText(inTable ? (table.isEditing() ? EDIT_KEYS : TABLE_KEYS) : FORM_KEYS);
+        show(keys, inTable ? (table.isEditing() ? EDIT_KEYS : TABLE_KEYS) : FORM_KEYS);
     }
 
     @Override
@@ -234,6 +235,21 @@ public final class ScenarioEditor extends BasicWindow {
         answers.put("Stay", this::refresh);
         ChoiceWindow.ask(gui, "Scenario file not saved",
                 current().isPresent() ? "The file is older than the screen. Save it?"
-                        : "Some values are invalid and the file is older than the screen.", answers);
+                        : "Some values are invalid and the file is older than the screen.", answers, unicode);
+    }
+
+    /**
+     * Whether the terminal shows Unicode; when not, unit symbols and marks are spelt in ASCII
+     * ({@code Ohm}, {@code degC}, {@code N*m}) so nothing prints as '?'.
+     */
+    public ScenarioEditor useUnicode(boolean on) {
+        this.unicode = on;
+        form.setUnicode(on);
+        refresh();
+        return this;
+    }
+
+    private void show(Label label, String text) {
+        label.setText(AsciiText.of(text, unicode));
     }
 }

@@ -31,12 +31,13 @@ public final class WorkbenchEditors implements EditorHooks {
     @Override
     public void openParts(Workbench workbench) {
         PartsEditor.open(workbench.gui(), parts,
-                () -> workbench.catalogChanged(parts.catalog(), parts.doubtfulIds()));
+                () -> workbench.catalogChanged(parts.catalog(), parts.doubtfulIds()))
+                .useUnicode(workbench.traits().unicode());
     }
 
     @Override
     public void openBench(Workbench workbench) {
         ScenarioEditor.open(workbench.gui(), workbench.scenario(), scenarioFile, workbench::scenarioChanged,
-                scenarioSaver);
+                scenarioSaver).useUnicode(workbench.traits().unicode());
     }
 }
