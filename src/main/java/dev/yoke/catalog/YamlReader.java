@@ -35,6 +35,13 @@ final class YamlReader {
     /** Largest file read, bytes: far above any real catalog (about 10 000 parts), far below memory trouble. */
     static final int MAX_FILE_BYTES = 8 * 1024 * 1024;
 
+    /**
+     * Longest line accepted, characters. The YAML scanner slows down more than linearly on one
+     * very long line (a 2 MB line took over 10 s), so a hostile file could stall the loader;
+     * no hand-written or Yoke-written line comes near this.
+     */
+    static final int MAX_LINE_CHARS = 10_000;
+
     /** Deepest nesting accepted; our formats need 4 levels. */
     static final int MAX_DEPTH = 20;
 
@@ -91,6 +98,9 @@ final class YamlReader {
         if (text == null) {
             return null;
         }
+        if (!linesShortEnough(text)) {
+            return null;
+        }
         if (text.isBlank()) {
             fileProblem("the file is empty");
             return null;
@@ -118,6 +128,27 @@ final class YamlReader {
             problems.add(fromOther(e));
         }
         return null;
+    }
+
+    /** Refuses the file when a line is longer than {@link #MAX_LINE_CHARS}, naming the first such line. */
+    private boolean linesShortEnough(String text) {
+        int line = 1;
+        int lineStart = 0;
+        for (int i = 0; i <= text.length(); i++) {
+            if (i == text.length() || text.charAt(i) == '\n' || text.charAt(i) == '\r') {
+                if (i - lineStart > MAX_LINE_CHARS) {
+                    problems.add(Problem.error(file, line, MAX_LINE_CHARS + 1, "", "the line is " + (i - lineStart)
+                            + " characters long; lines longer than " + MAX_LINE_CHARS + " are refused"));
+                    return false;
+                }
+                if (i < text.length() && text.charAt(i) == '\r' && i + 1 < text.length() && text.charAt(i + 1) == '\n') {
+                    i++;
+                }
+                line++;
+                lineStart = i + 1;
+            }
+        }
+        return true;
     }
 
     static String tooLarge(long size) {
