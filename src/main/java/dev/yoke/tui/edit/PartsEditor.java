@@ -10,6 +10,8 @@ import com.googlecode.lanterna.gui2.WindowBasedTextGUI;
 import com.googlecode.lanterna.input.KeyStroke;
 import com.googlecode.lanterna.input.KeyType;
 
+import dev.yoke.catalog.ChangedOnDiskException;
+
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -323,10 +325,10 @@ public final class PartsEditor extends BasicWindow {
     void write(PartChange change, Consumer<String> done) {
         try {
             store.apply(change);
-            written(change, "Saved " + describe(change) + " to " + change.file()
+            written(change, "Saved " + describe(change) + " to " + change.file().getFileName()
                     + " (previous version in " + change.file().getFileName() + ".bak)");
             done.accept(null);
-        } catch (PartStore.ChangedOnDiskException e) {
+        } catch (ChangedOnDiskException e) {
             askAboutConflict(change, e.file(), done);
         } catch (IOException | RuntimeException e) {
             message = "NOT saved: " + change.file() + ": " + e.getMessage();

@@ -10,6 +10,7 @@ import com.googlecode.lanterna.gui2.Window;
 import com.googlecode.lanterna.gui2.WindowBasedTextGUI;
 import com.googlecode.lanterna.input.KeyStroke;
 import com.googlecode.lanterna.input.KeyType;
+import dev.yoke.catalog.ChangedOnDiskException;
 import dev.yoke.model.Scenario;
 import dev.yoke.model.Segment;
 import dev.yoke.units.Dimension;
@@ -95,6 +96,8 @@ public final class ScenarioEditor extends BasicWindow {
 
     /**
      * Opens the editor on top of the workbench, saving through the catalog package's scenario writer.
+     * The file as it is on disk now counts as the version being edited: if someone else changes it
+     * before F2, the editor asks before overwriting.
      *
      * @param gui      the workbench's window manager
      * @param scenario what the workbench ranks now
@@ -103,7 +106,7 @@ public final class ScenarioEditor extends BasicWindow {
      */
     public static ScenarioEditor open(WindowBasedTextGUI gui, Scenario scenario, Path file,
                                       Consumer<Scenario> onChange) {
-        return open(gui, scenario, file, onChange, ScenarioFiles.defaultSaver());
+        return open(gui, scenario, file, onChange, ScenarioFiles.startingFromDisk(file));
     }
 
     /** Like {@link #open(WindowBasedTextGUI, Scenario, Path, Consumer)} with the file writer given. */
@@ -153,15 +156,38 @@ public final class ScenarioEditor extends BasicWindow {
         passOn();
         try {
             saver.save(s.get(), file);
-            saved = s.get();
-            message = "Saved " + file.getFileName() + " (previous version kept as "
-                    + file.getFileName() + ".bak)";
-        } catch (IOException e) {
+            savedAs(s.get(), "");
+        } catch (ChangedOnDiskException e) {
+            askAboutChangedFile(s.get());
+        } catch (IOException | RuntimeException e) {
             message = "Not saved: " + file + ": " + e.getMessage();
-        } catch (RuntimeException e) {
-            message = "Not saved: " + e.getMessage();
         }
         refresh();
+    }
+
+    private void savedAs(Scenario scenario, String note) {
+        saved = scenario;
+        message = "Saved " + file.getFileName() + note + " (previous version kept as " + file.getFileName() + ".bak)";
+    }
+
+    private void askAboutChangedFile(Scenario scenario) {
+        LinkedHashMap<String, Runnable> answers = new LinkedHashMap<>();
+        answers.put("Overwrite", () -> {
+            try {
+                saver.overwrite(scenario, file);
+                savedAs(scenario, " over the other version");
+            } catch (IOException | RuntimeException e) {
+                message = "Not saved: " + file + ": " + e.getMessage();
+            }
+            refresh();
+        });
+        answers.put("Back", () -> {
+            message = "Not saved: " + file.getFileName() + " changed on disk; your edits are still here";
+            refresh();
+        });
+        ChoiceWindow.ask(gui, "Scenario file changed on disk", file + " was changed by someone else since it was"
+                + " read. Overwrite it? The other version is then kept as " + file.getFileName() + ".bak.",
+                answers, unicode);
     }
 
     private String summary() {
