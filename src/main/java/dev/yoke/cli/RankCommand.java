@@ -29,7 +29,6 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.concurrent.Callable;
-import java.util.stream.Collectors;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -56,10 +55,10 @@ public final class RankCommand implements Callable<Integer> {
     Path catalogDir;
 
     @Option(names = "--sort", paramLabel = "KEY[,KEY...]",
-            description = {"Sort keys, most important first; KEY:desc sorts descending (KEY or KEY:asc ascending).",
-                    "Keys: motor, switch, pwm_frequency, gear_ratio, pareto and every metric, e.g. cost, total_loss,",
-                    "efficiency, junction_temp_max, binding_margin, margin_junction. NaN sorts last.",
-                    "Default: feasible:desc,total_loss,cost."})
+            description = "Sort keys, most important first; KEY:desc sorts descending (KEY or KEY:asc ascending). "
+                    + "Keys: motor, switch, pwm_frequency, gear_ratio, pareto and every metric, e.g. cost, total_loss, "
+                    + "efficiency, junction_temp_max, binding_margin, margin_junction. Missing values sort last. "
+                    + "Default: feasible:desc,total_loss,cost.")
     String sort;
 
     @Option(names = "--feasible-only", description = "Only pairings with no negative margin.")
@@ -201,11 +200,7 @@ public final class RankCommand implements Callable<Integer> {
     private Map<String, String> describe(List<SortKey> keys, RowFilter filter) {
         Map<String, String> m = new LinkedHashMap<>();
         m.put("catalog", catalogDir.toString());
-        m.put("sort", keys.stream().map(SortKey::toString).collect(Collectors.joining(",")));
-        m.put("feasible_only", Boolean.toString(filter.feasibleOnly()));
-        m.put("pareto_only", Boolean.toString(filter.paretoOnly()));
-        m.put("max_cost", maxCost == null ? "" : maxCost.toString());
-        m.put("match", filter.text());
+        m.putAll(Meta.viewOptions(keys, filter));
         m.put("top", top == null ? "" : top.toString());
         return m;
     }
