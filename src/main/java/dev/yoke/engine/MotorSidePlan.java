@@ -147,7 +147,7 @@ final class MotorSidePlan implements PairingEvaluator.MotorSide {
         double frictionTorque = motor.frictionTorque();
         double loadInertia = profile.loadInertia();
         double r20 = Copper.resistance20(motor.resistance(), motor.resistanceTemp());
-        RippleCache ripple = new RippleCache(modulation, bus, motor.inductance(), frequency);
+        RippleCache ripples = new RippleCache(modulation, bus, motor.inductance(), frequency);
 
         // Mechanics: constant within a piece.
         double[] housingLoss = new double[n];
@@ -189,7 +189,7 @@ final class MotorSidePlan implements PairingEvaluator.MotorSide {
         for (int pass = 0; pass < THERMAL_PASSES; pass++) {
             for (int k = 0; k < n; k++) {
                 double r = Copper.resistanceAt(motor.resistance(), motor.resistanceTemp(), windingMeanTemp[k]);
-                double ms = current[k] * current[k] + rippleVariance(ripple, modulation, bus, r, k, kt, motor);
+                double ms = current[k] * current[k] + rippleVariance(ripples, modulation, bus, r, k, kt, motor);
                 lossAtAmbient[k] = ms * r20 * (1 + Copper.ALPHA_20 * (ambient - Copper.REFERENCE_TEMP));
                 lossSlope[k] = ms * r20 * Copper.ALPHA_20;
             }
@@ -237,7 +237,7 @@ final class MotorSidePlan implements PairingEvaluator.MotorSide {
             duty = Math.max(duty, Math.max(ConductionPattern.highSideDuty(modulation, v0 / bus),
                     ConductionPattern.highSideDuty(modulation, v1 / bus)));
 
-            double variance = rippleVariance(ripple, modulation, bus, r, k, kt, motor);
+            double variance = rippleVariance(ripples, modulation, bus, r, k, kt, motor);
             double ms = i * i + variance;
             meanSquare[k] = ms;
             sumSquare += weight[k] * ms;
@@ -251,9 +251,9 @@ final class MotorSidePlan implements PairingEvaluator.MotorSide {
                 lo = 0;
             }
             double dStar = Math.max(lo, Math.min(hi, 0.5));
-            RippleWaveform w0 = ripple.get(r, d0);
-            RippleWaveform w1 = ripple.get(r, d1);
-            RippleWaveform ws = ripple.get(r, dStar);
+            RippleWaveform w0 = ripples.get(r, d0);
+            RippleWaveform w1 = ripples.get(r, d1);
+            RippleWaveform ws = ripples.get(r, dStar);
             ripple[k] = Math.max(ws.peakToPeak(), Math.max(w0.peakToPeak(), w1.peakToPeak()));
             peak[k] = Math.max(ws.peak(i), Math.max(w0.peak(i), w1.peak(i)));
             rippleWorst = Math.max(rippleWorst, ripple[k]);
@@ -432,15 +432,15 @@ final class MotorSidePlan implements PairingEvaluator.MotorSide {
     }
 
     /** Ripple variance averaged over the piece's voltage ramp (Simpson's rule on start, middle and end). */
-    private double rippleVariance(RippleCache ripple, Modulation modulation, double bus, double r, int k, double kt,
+    private double rippleVariance(RippleCache ripples, Modulation modulation, double bus, double r, int k, double kt,
             Motor m) {
         double i = current[k];
         double v0 = DcMotor.terminalVoltage(i, r, kt, motorSpeedStart[k], m.brushDrop());
         double v1 = DcMotor.terminalVoltage(i, r, kt, motorSpeedEnd[k], m.brushDrop());
         double vm = (v0 + v1) / 2;
-        double a = ripple.get(r, ConductionPattern.rippleOnFraction(modulation, v0 / bus)).variance();
-        double b = ripple.get(r, ConductionPattern.rippleOnFraction(modulation, vm / bus)).variance();
-        double c = ripple.get(r, ConductionPattern.rippleOnFraction(modulation, v1 / bus)).variance();
+        double a = ripples.get(r, ConductionPattern.rippleOnFraction(modulation, v0 / bus)).variance();
+        double b = ripples.get(r, ConductionPattern.rippleOnFraction(modulation, vm / bus)).variance();
+        double c = ripples.get(r, ConductionPattern.rippleOnFraction(modulation, v1 / bus)).variance();
         return (a + 4 * b + c) / 6;
     }
 
