@@ -100,7 +100,7 @@ public final class BenchCommand implements Callable<Integer> {
         long pairings = (long) motors * switches * frequencies * ratios;
         out.printf(Locale.ROOT, "(a) throughput: %d motors x %d switches x %d frequencies x %d ratios = %,d pairings,"
                 + " %d segments, keeping the top 20%n", motors, switches, frequencies, ratios, pairings, segments);
-        long warmEnd = System.nanoTime() + 2_000_000_000L;
+        long warmEnd = System.nanoTime() + (long) (Math.min(2.0, seconds / 2) * 1e9);
         while (System.nanoTime() < warmEnd) {
             Sweep.run(evaluator, options);
         }

@@ -1,6 +1,5 @@
 package dev.yoke.cli;
 
-import dev.yoke.catalog.CatalogFile;
 import dev.yoke.catalog.CatalogLoader;
 import dev.yoke.catalog.InputException;
 import dev.yoke.catalog.LoadedCatalog;
@@ -10,7 +9,6 @@ import dev.yoke.catalog.ScenarioLoader;
 import dev.yoke.report.Meta;
 import java.io.PrintWriter;
 import java.nio.file.Path;
-import java.time.Instant;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
@@ -70,15 +68,6 @@ record Inputs(LoadedScenario scenario, LoadedCatalog catalog) {
 
     /** What an export needs to be reproduced. */
     Meta meta(List<String> command, Map<String, String> options) {
-        List<Meta.SourceFile> files = new ArrayList<>();
-        for (CatalogFile f : catalog.files()) {
-            files.add(source(f));
-        }
-        return new Meta(VersionProvider.version(), Instant.now(), source(scenario.file()), files, command, options);
-    }
-
-    private static Meta.SourceFile source(CatalogFile f) {
-        return new Meta.SourceFile(f.path().toString(), f.sha256(), f.size(),
-                f.lastModified() == null ? null : f.lastModified().toInstant());
+        return Meta.of(VersionProvider.version(), scenario.file(), catalog.files(), command, options);
     }
 }

@@ -29,7 +29,6 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.concurrent.Callable;
-import java.util.stream.Collectors;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -201,11 +200,7 @@ public final class RankCommand implements Callable<Integer> {
     private Map<String, String> describe(List<SortKey> keys, RowFilter filter) {
         Map<String, String> m = new LinkedHashMap<>();
         m.put("catalog", catalogDir.toString());
-        m.put("sort", keys.stream().map(SortKey::toString).collect(Collectors.joining(",")));
-        m.put("feasible_only", Boolean.toString(filter.feasibleOnly()));
-        m.put("pareto_only", Boolean.toString(filter.paretoOnly()));
-        m.put("max_cost", maxCost == null ? "" : maxCost.toString());
-        m.put("match", filter.text());
+        m.putAll(Meta.viewOptions(keys, filter));
         m.put("top", top == null ? "" : top.toString());
         return m;
     }

@@ -233,7 +233,13 @@ public final class DriveEvaluator implements PairingEvaluator {
 
     @Override
     public PairingResult explain(int motor, int switchIndex, int frequency, int ratio) {
-        MotorSidePlan plan = (MotorSidePlan) prepare(motor, frequency, ratio);
+        return explain(prepare(motor, frequency, ratio), switchIndex);
+    }
+
+    /** The detailed evaluation of one switch on an already prepared motor side (saves preparing it again). */
+    public PairingResult explain(MotorSide motorSide, int switchIndex) {
+        MotorSidePlan plan = (MotorSidePlan) motorSide;
+        int frequency = plan.frequencyIndex;
         SwitchConstants s = switches[switchIndex];
         double[] row = new double[Metric.COUNT];
         summarize(plan, switchIndex, row);

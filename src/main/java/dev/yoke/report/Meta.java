@@ -41,6 +41,46 @@ public record Meta(String yokeVersion, Instant created, SourceFile scenario, Lis
         options = java.util.Collections.unmodifiableMap(new LinkedHashMap<>(options));
     }
 
+    /**
+     * A record of the files as the loaders read them, made now.
+     *
+     * @param yokeVersion  {@code dev.yoke.cli.VersionProvider.version()}
+     * @param scenario     the scenario file as read, or null
+     * @param catalogFiles the catalog files as read
+     */
+    public static Meta of(String yokeVersion, dev.yoke.catalog.CatalogFile scenario,
+                          List<dev.yoke.catalog.CatalogFile> catalogFiles, List<String> command, Map<String, String> options) {
+        List<SourceFile> files = new java.util.ArrayList<>();
+        for (dev.yoke.catalog.CatalogFile f : catalogFiles) {
+            files.add(source(f));
+        }
+        return new Meta(yokeVersion, Instant.now(), scenario == null ? null : source(scenario), files, command, options);
+    }
+
+    private static SourceFile source(dev.yoke.catalog.CatalogFile f) {
+        return new SourceFile(f.path().toString(), f.sha256(), f.size(),
+                f.lastModified() == null ? null : f.lastModified().toInstant());
+    }
+
+    /** A view's sort order and filter in words, for {@link #options()}. */
+    public static Map<String, String> viewOptions(List<dev.yoke.engine.SortKey> order, dev.yoke.engine.RowFilter filter) {
+        Map<String, String> m = new LinkedHashMap<>();
+        m.put("sort", order.stream().map(dev.yoke.engine.SortKey::toString).collect(java.util.stream.Collectors.joining(",")));
+        m.put("feasible_only", Boolean.toString(filter.feasibleOnly()));
+        m.put("pareto_only", Boolean.toString(filter.paretoOnly()));
+        m.put("max_cost", filter.maxCost() == Double.POSITIVE_INFINITY ? "" : Double.toString(filter.maxCost()));
+        m.put("match", filter.text());
+        StringBuilder least = new StringBuilder();
+        filter.atLeast().entrySet().stream().sorted(Map.Entry.comparingByKey()).forEach(e -> {
+            if (least.length() > 0) {
+                least.append(',');
+            }
+            least.append(e.getKey().key()).append(">=").append(e.getValue());
+        });
+        m.put("at_least", least.toString());
+        return m;
+    }
+
     /** The sidecar path of an export: {@code short.csv} gives {@code short.meta.json}. */
     public static java.nio.file.Path sidecarOf(java.nio.file.Path export) {
         String name = export.getFileName().toString();

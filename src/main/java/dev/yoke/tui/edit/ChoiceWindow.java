@@ -42,7 +42,7 @@ final class ChoiceWindow extends BasicWindow {
         }
         ChoiceWindow window = new ChoiceWindow(title, last);
         Panel panel = new Panel(new LinearLayout(Direction.VERTICAL));
-        panel.addComponent(new Label(message));
+        panel.addComponent(new Label(wrap(message, 60)));
         Panel buttons = new Panel(new LinearLayout(Direction.HORIZONTAL));
         for (Map.Entry<String, Runnable> a : answers.entrySet()) {
             Runnable action = a.getValue();
@@ -56,6 +56,24 @@ final class ChoiceWindow extends BasicWindow {
         window.setComponent(panel);
         gui.addWindow(window);
         return window;
+    }
+
+    /** Breaks {@code text} into lines of at most {@code width} columns at spaces. */
+    static String wrap(String text, int width) {
+        StringBuilder out = new StringBuilder();
+        int lineLength = 0;
+        for (String word : text.split(" ")) {
+            if (lineLength > 0 && lineLength + 1 + word.length() > width) {
+                out.append('\n');
+                lineLength = 0;
+            } else if (lineLength > 0) {
+                out.append(' ');
+                lineLength++;
+            }
+            out.append(word);
+            lineLength += word.length();
+        }
+        return out.toString();
     }
 
     private static String lastKey(LinkedHashMap<String, Runnable> answers) {

@@ -33,7 +33,9 @@ import java.util.function.Consumer;
  */
 public final class FieldForm extends AbstractInteractableComponent<FieldForm> {
 
-    private static final int VALUE_WIDTH = 18;
+    private static final int MIN_VALUE_WIDTH = 18;
+    private static final int MAX_VALUE_WIDTH = 34;
+    private static final int MESSAGE_ROOM = 30;
 
     private final List<FormField> fields;
     private final List<FormRule> rules;
@@ -46,6 +48,7 @@ public final class FieldForm extends AbstractInteractableComponent<FieldForm> {
     private int selected;
     private int top;
     private int selectedLine;
+    private int valueWidth = MIN_VALUE_WIDTH;
     private boolean changedSinceCommit;
     private Consumer<FieldForm> editListener = f -> { };
     private Consumer<FieldForm> commitListener = f -> { };
@@ -150,7 +153,8 @@ public final class FieldForm extends AbstractInteractableComponent<FieldForm> {
         if (f.isChoice()) {
             return f.key() + ": one of " + String.join(", ", f.choices()) + " (Space cycles)";
         }
-        return f.unit().isEmpty() ? f.key() : f.key() + " in " + f.unit() + " (SI prefixes accepted)";
+        String what = f.unit().isEmpty() ? f.key() : f.key() + " [" + f.unit() + "]";
+        return f.help().isEmpty() ? what : what + ": " + f.help();
     }
 
     private int indexOf(String key) {
@@ -221,7 +225,7 @@ public final class FieldForm extends AbstractInteractableComponent<FieldForm> {
     }
 
     private int messageColumn() {
-        return 4 + labelWidth + 1 + VALUE_WIDTH + 2 + 1 + unitWidth + 2;
+        return 4 + labelWidth + 1 + valueWidth + 2 + 1 + unitWidth + 2;
     }
 
     /** Moves {@code top} so that the selected field and its message line are on screen. */
@@ -340,7 +344,7 @@ public final class FieldForm extends AbstractInteractableComponent<FieldForm> {
         @Override
         public TerminalSize getPreferredSize(FieldForm form) {
             synchronized (form) {
-                int width = form.messageColumn() + 30;
+                int width = form.messageColumn() + MESSAGE_ROOM;
                 return new TerminalSize(width, form.visibleRows);
             }
         }
@@ -353,7 +357,7 @@ public final class FieldForm extends AbstractInteractableComponent<FieldForm> {
                 }
                 LineEditor e = form.editors.get(form.selected);
                 int caretColumn = TerminalTextUtils.getColumnWidth(
-                        e.text().substring(e.scrollFor(VALUE_WIDTH), e.caret()));
+                        e.text().substring(e.scrollFor(form.valueWidth), e.caret()));
                 return new TerminalPosition(4 + form.labelWidth + 2 + caretColumn, form.selectedLine);
             }
         }
@@ -366,6 +370,8 @@ public final class FieldForm extends AbstractInteractableComponent<FieldForm> {
                 if (rows <= 0) {
                     return;
                 }
+                int fixed = 4 + form.labelWidth + 1 + 2 + 1 + form.unitWidth + 2;
+                form.valueWidth = Math.max(MIN_VALUE_WIDTH, Math.min(MAX_VALUE_WIDTH, width - fixed - MESSAGE_ROOM));
                 List<int[]> lines = form.layout(width);
                 form.fitTop(lines, rows);
                 g.applyThemeStyle(form.getThemeDefinition().getNormal());
@@ -413,11 +419,11 @@ public final class FieldForm extends AbstractInteractableComponent<FieldForm> {
             if (f.isChoice()) {
                 shown = "< " + e.text() + " >";
             } else {
-                int from = current ? e.scrollFor(VALUE_WIDTH) : 0;
+                int from = current && form.isFocused() ? e.scrollFor(form.valueWidth) : 0;
                 shown = e.text().substring(Math.min(from, e.text().length()));
             }
-            shown = TerminalTextUtils.fitString(shown, VALUE_WIDTH);
-            shown = shown + " ".repeat(Math.max(0, VALUE_WIDTH - TerminalTextUtils.getColumnWidth(shown)));
+            shown = TerminalTextUtils.fitString(shown, form.valueWidth);
+            shown = shown + " ".repeat(Math.max(0, form.valueWidth - TerminalTextUtils.getColumnWidth(shown)));
             g.putString(x, line, "[");
             if (current && form.isFocused()) {
                 g.applyThemeStyle(form.getThemeDefinition().getActive());
@@ -426,8 +432,8 @@ public final class FieldForm extends AbstractInteractableComponent<FieldForm> {
             } else {
                 g.putString(x + 1, line, shown);
             }
-            g.putString(x + 1 + VALUE_WIDTH, line, "]");
-            int ux = x + VALUE_WIDTH + 3;
+            g.putString(x + 1 + form.valueWidth, line, "]");
+            int ux = x + form.valueWidth + 3;
             g.putString(ux, line, f.unit());
             int mx = ux + form.unitWidth + 2;
             if (problem != null && !messageBelow && mx < width) {

@@ -6,7 +6,11 @@ import dev.yoke.catalog.PartFields;
 import dev.yoke.catalog.PartKind;
 import dev.yoke.model.Modulation;
 import dev.yoke.units.Dimension;
+import dev.yoke.units.UnitException;
 import dev.yoke.units.Units;
+
+import java.math.BigDecimal;
+import java.math.MathContext;
 
 import java.util.ArrayList;
 import java.util.Arrays;
@@ -24,6 +28,7 @@ import java.util.function.Function;
  * @param writer       value to text, read back exactly by {@code reader}
  * @param choices      fixed options cycled with Space or Left/Right; empty for typed fields
  * @param emptyValue   value taken when the text is blank; {@code null} makes the field required
+ * @param help         one line saying what the field means, shown while it is selected
  */
 public record FormField(
         String key,
@@ -31,25 +36,27 @@ public record FormField(
         Function<String, Object> reader,
         Function<Object, String> writer,
         List<String> choices,
-        Object emptyValue) {
+        Object emptyValue,
+        String help) {
 
     public FormField {
         Objects.requireNonNull(key, "key");
         Objects.requireNonNull(reader, "reader");
         Objects.requireNonNull(writer, "writer");
         unit = unit == null ? "" : unit;
+        help = help == null ? "" : help;
         choices = List.copyOf(choices);
     }
 
     /** Free text; required unless {@code optional}. The value is the trimmed string. */
     public static FormField text(String key, boolean optional) {
-        return new FormField(key, "", String::trim, String::valueOf, List.of(), optional ? "" : null);
+        return new FormField(key, "", String::trim, String::valueOf, List.of(), optional ? "" : null, "");
     }
 
     /** One of fixed words; the value is {@code toValue} of the chosen word. */
     public static FormField choice(String key, List<String> words, Function<String, Object> toValue,
                                    Function<Object, String> toWord) {
-        return new FormField(key, "", toValue, toWord, words, null);
+        return new FormField(key, "", toValue, toWord, words, null, "");
     }
 
     /**
@@ -67,32 +74,63 @@ public record FormField(
             return r.value();
         };
         Object whenBlank = spec.required() ? null : spec.defaultValue();
+        String help = spec.description()
+                + (spec.required() || spec.defaultText().isEmpty() ? "" : "; default " + spec.defaultText());
         return switch (spec.type()) {
-            case QUANTITY -> new FormField(spec.key(), unitOf(spec.dimension()), reader,
-                    v -> Units.formatExact((Double) v, spec.dimension()), List.of(), whenBlank);
-            case QUANTITY_LIST -> new FormField(spec.key(), unitOf(spec.dimension()), reader, v -> {
+            case QUANTITY -> new FormField(spec.key(), spec.dimension().symbol(), reader,
+                    v -> writeQuantity((Double) v, spec.dimension()), List.of(), whenBlank, help);
+            case QUANTITY_LIST -> new FormField(spec.key(), spec.dimension().symbol(), reader, v -> {
                 List<String> parts = new ArrayList<>();
                 for (Object item : (List<?>) v) {
-                    parts.add(Units.formatExact((Double) item, spec.dimension()));
+                    parts.add(writeQuantity((Double) item, spec.dimension()));
                 }
                 return String.join(", ", parts);
-            }, List.of(), null);
-            case BOOLEAN -> new FormField(spec.key(), "", reader, String::valueOf, List.of("true", "false"), null);
+            }, List.of(), null, help);
+            case BOOLEAN -> new FormField(spec.key(), "", reader, String::valueOf, List.of("true", "false"), null, help);
             case MODULATION -> new FormField(spec.key(), "", reader, v -> ((Modulation) v).fileName(),
-                    Arrays.stream(Modulation.values()).map(Modulation::fileName).toList(), null);
-            case IDENTIFIER, TEXT -> new FormField(spec.key(), "", reader, String::valueOf, List.of(), whenBlank);
+                    Arrays.stream(Modulation.values()).map(Modulation::fileName).toList(), null, help);
+            case IDENTIFIER, TEXT -> new FormField(spec.key(), "", reader, String::valueOf, List.of(), whenBlank, help);
             case SECTION, SECTION_LIST -> throw new IllegalArgumentException(spec.key() + " is a section");
         };
+    }
+
+    /**
+     * A quantity as field text that reads back to exactly {@code si}: speeds in rpm and small
+     * inertias in g·cm² when a short decimal in those units reads back exactly (the units the trade
+     * quotes them in), otherwise {@link Units#formatExact}.
+     */
+    static String writeQuantity(double si, Dimension d) {
+        String exact = Units.formatExact(si, d);
+        if (d == Dimension.ANGULAR_SPEED) {
+            return shortIn(si, d, "rpm", Math.PI / 30, exact);
+        }
+        if (d == Dimension.INERTIA && si != 0 && Math.abs(si) < 1e-3) {
+            return shortIn(si, d, "g*cm^2", 1e-7, exact);
+        }
+        return exact;
+    }
+
+    private static String shortIn(double si, Dimension d, String symbol, double factor, String otherwise) {
+        if (si == 0 || !Double.isFinite(si)) {
+            return otherwise;
+        }
+        BigDecimal inUnit = new BigDecimal(si / factor);
+        for (int digits = 1; digits <= 10; digits++) {
+            String text = inUnit.round(new MathContext(digits)).stripTrailingZeros().toPlainString() + " " + symbol;
+            try {
+                if (Units.parse(text, d) == si) {
+                    return text;
+                }
+            } catch (UnitException e) {
+                return otherwise;
+            }
+        }
+        return otherwise;
     }
 
     /** The catalog's field for {@code key} of {@code kind}, as a form field. */
     public static FormField of(PartKind kind, String key) {
         return of(PartFields.find(kind, key).orElseThrow(() -> new IllegalArgumentException(kind + " has no " + key)));
-    }
-
-    /** The unit shown beside a field: the symbol its text is written in. */
-    static String unitOf(Dimension d) {
-        return d == Dimension.ANGULAR_SPEED ? "rad/s" : d.symbol();
     }
 
     /** Whether the field is cycled through options rather than typed. */

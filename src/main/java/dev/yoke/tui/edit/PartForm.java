@@ -77,7 +77,8 @@ final class PartForm extends BasicWindow {
         form.onEdit(f -> refresh());
         Panel panel = new Panel(new LinearLayout(Direction.VERTICAL).setSpacing(0));
         panel.addComponent(title);
-        panel.addComponent(form);
+        panel.addComponent(form, LinearLayout.createLayoutData(LinearLayout.Alignment.Fill,
+                LinearLayout.GrowPolicy.CanGrow));
         panel.addComponent(status);
         panel.addComponent(state);
         panel.addComponent(new Label(KEYS));

@@ -6,6 +6,7 @@ import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Optional;
+import java.util.Set;
 
 /**
  * The catalog files as the parts editor sees them: what they hold, and the writes it asks for.
@@ -37,8 +38,23 @@ public interface PartStore {
      * and the edited version is written beside it.
      *
      * @return where the edited version went
+     * @throws IOException when it cannot be written, or the change is a deletion (nothing to keep)
      */
-    Path applyBeside(PartChange change) throws IOException;
+    Kept applyBeside(PartChange change) throws IOException;
+
+    /** Ids of parts the catalog's plausibility check doubts (marked in the shortlist). */
+    default Set<String> doubtfulIds() {
+        return Set.of();
+    }
+
+    /**
+     * Where a part kept beside a changed file went.
+     *
+     * @param file the new file
+     * @param id   the part's id there (changed when the old one is taken)
+     */
+    record Kept(Path file, String id) {
+    }
 
     /** Reads every file again from disk, forgetting what was loaded before. */
     void reload() throws IOException;

@@ -35,7 +35,7 @@ import java.util.function.Consumer;
 public final class PartsEditor extends BasicWindow {
 
     private static final String LIST_KEYS =
-            "Up/Down part  Tab motors/switches  / filter  Enter edit  a add  c copy  d delete  Esc close";
+            "Tab motors/switches  / filter  Enter edit  a add  c copy  d delete  Esc close";
     private static final String FILTER_KEYS = "type to filter by id or label  Enter keep filter  Esc clear filter";
 
     private final WindowBasedTextGUI gui;
@@ -61,7 +61,8 @@ public final class PartsEditor extends BasicWindow {
         list = new PartListView(gui.getScreen().getTerminalSize().getRows() - 4);
         Panel panel = new Panel(new LinearLayout(Direction.VERTICAL).setSpacing(0));
         panel.addComponent(title);
-        panel.addComponent(list);
+        panel.addComponent(list, LinearLayout.createLayoutData(LinearLayout.Alignment.Fill,
+                LinearLayout.GrowPolicy.CanGrow));
         panel.addComponent(status);
         panel.addComponent(keys);
         setComponent(panel);
@@ -346,20 +347,25 @@ public final class PartsEditor extends BasicWindow {
             }
             write(change, done);
         });
-        answers.put("Keep both", () -> {
-            try {
-                Path beside = store.applyBeside(change);
-                written(change, "Kept " + file.getFileName() + " as it is on disk; your version is in " + beside);
-                done.accept(null);
-            } catch (IOException | RuntimeException e) {
-                message = "NOT saved: " + e.getMessage();
-                refresh();
-                done.accept(message);
-            }
-        });
+        if (change instanceof PartChange.Put) {
+            answers.put("Keep both", () -> keepBoth(change, file, done));
+        }
         answers.put("Back", () -> done.accept("NOT saved: " + file + " changed on disk; nothing written"));
         ChoiceWindow.ask(gui, "File changed on disk",
                 file + " was changed by someone else since it was loaded.", answers);
+    }
+
+    private void keepBoth(PartChange change, Path file, Consumer<String> done) {
+        try {
+            PartStore.Kept kept = store.applyBeside(change);
+            written(change, "Kept " + file.getFileName() + " as it is on disk; yours is " + kept.id()
+                    + " in " + kept.file());
+            done.accept(null);
+        } catch (IOException | RuntimeException e) {
+            message = "NOT saved: " + e.getMessage();
+            refresh();
+            done.accept(message);
+        }
     }
 
     private void written(PartChange change, String text) {

@@ -37,7 +37,7 @@ public final class ScenarioEditor extends BasicWindow {
     private static final String FORM_KEYS =
             "Up/Down field  type to edit  Space choice  Tab segments  F2 save file  Esc close";
     private static final String TABLE_KEYS =
-            "arrows cell  Enter edit  a add  x remove  [ ] move up/down  Tab bench  F2 save  Esc close";
+            "Enter edit  a add  x remove  [ ] move up/down  Tab bench  F2 save  Esc close";
     private static final String EDIT_KEYS =
             "type to edit  Enter keep  Esc undo  Tab next cell  Shift+Tab previous cell";
 
@@ -67,9 +67,11 @@ public final class ScenarioEditor extends BasicWindow {
         this.saved = scenario;
         setHints(List.of(Window.Hint.FULL_SCREEN, Window.Hint.NO_DECORATIONS));
         TerminalSize screen = gui.getScreen().getTerminalSize();
+        // title, heading, table header, status, state and keys take a line each; the rest is shared,
+        // the table getting room for its segments plus two added ones, at most half
         int spare = Math.max(8, screen.getRows() - 6);
-        int formRows = Math.max(4, spare * 10 / 18);
-        int tableRows = Math.max(3, spare - formRows);
+        int tableRows = Math.max(3, Math.min(scenario.profile().segments().size() + 2, spare / 2));
+        int formRows = Math.max(4, spare - tableRows);
         form = new FieldForm(ScenarioFields.fields(), ScenarioFields.rules(), formRows);
         ScenarioFields.fill(form, scenario);
         table = new SegmentTable(scenario.profile().segments(), tableRows);
@@ -78,9 +80,10 @@ public final class ScenarioEditor extends BasicWindow {
 
         Panel panel = new Panel(new LinearLayout(Direction.VERTICAL).setSpacing(0));
         panel.addComponent(title);
-        panel.addComponent(form);
+        panel.addComponent(form, LinearLayout.createLayoutData(LinearLayout.Alignment.Fill));
         panel.addComponent(heading);
-        panel.addComponent(table);
+        panel.addComponent(table, LinearLayout.createLayoutData(LinearLayout.Alignment.Fill,
+                LinearLayout.GrowPolicy.CanGrow));
         panel.addComponent(status);
         panel.addComponent(state);
         panel.addComponent(keys);

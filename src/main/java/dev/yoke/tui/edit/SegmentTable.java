@@ -150,7 +150,8 @@ public final class SegmentTable extends AbstractInteractableComponent<SegmentTab
         if (p != null) {
             return where + ": " + p;
         }
-        return spec.unit().isEmpty() ? where : where + " in " + spec.unit() + " (SI prefixes accepted)";
+        String what = spec.unit().isEmpty() ? where : where + " [" + spec.unit() + "]";
+        return spec.help().isEmpty() ? what : what + ": " + spec.help();
     }
 
     private String problem(int r, int c) {

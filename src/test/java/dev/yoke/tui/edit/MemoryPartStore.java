@@ -85,9 +85,9 @@ final class MemoryPartStore implements PartStore {
     }
 
     @Override
-    public Path applyBeside(PartChange change) {
+    public Kept applyBeside(PartChange change) {
         besides.add(change);
-        return change.file().resolveSibling(change.file().getFileName() + ".mine");
+        return new Kept(change.file().resolveSibling("motors.mine.yaml"), "renamed-mine");
     }
 
     @Override

@@ -199,7 +199,7 @@ class PartsEditorTest {
             t.press(KeyType.ArrowRight).press(KeyType.Enter); // Keep both
             assertTrue(store.applied.isEmpty(), "the changed file is left alone");
             assertEquals(1, store.besides.size());
-            assertTrue(t.text().contains("motors.yaml.mine"), t.text());
+            assertTrue(t.text().contains("yours is renamed-mine in motors.mine.yaml"), t.text());
         }
     }
 

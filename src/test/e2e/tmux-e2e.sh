@@ -1,0 +1,81 @@
+#!/bin/sh
+# End-to-end run of the workbench in a real terminal (tmux): start it on the demo scenario, sort by
+# cost, open a pairing's detail, export the view to CSV, open help, quit. Screen captures go to
+# OUT/NN-name.txt for the calling test to check; the script itself fails fast when a screen it
+# waits for never appears.
+#
+# usage: tmux-e2e.sh JAR PROJECT_DIR OUT_DIR
+set -eu
+jar=$1
+project=$2
+out=$3
+mkdir -p "$out"
+work="$out/work"
+mkdir -p "$work"
+sock="yoke-e2e-$$"
+tm() { tmux -L "$sock" -f /dev/null "$@"; }
+cleanup() { tm kill-server >/dev/null 2>&1 || true; }
+trap cleanup EXIT INT TERM
+
+capture() { tm capture-pane -p -t e2e > "$out/$1.txt"; }
+
+# wait_for TEXT SECONDS: polls the screen until TEXT shows.
+wait_for() {
+    tries=$(( $2 * 10 ))
+    while [ "$tries" -gt 0 ]; do
+        if tm capture-pane -p -t e2e 2>/dev/null | grep -F -q -- "$1"; then
+            return 0
+        fi
+        sleep 0.1
+        tries=$(( tries - 1 ))
+    done
+    tm capture-pane -p -t e2e > "$out/timeout.txt" 2>/dev/null || true
+    echo "tmux-e2e: '$1' did not appear within $2 s (screen in $out/timeout.txt)" >&2
+    exit 1
+}
+
+keys() { tm send-keys -t e2e "$@"; }
+
+# The export lands in the working folder, so the tool runs there with absolute input paths.
+tm new-session -d -s e2e -x 120 -y 40 \
+    "cd '$work' && TERM=xterm-256color LANG=C.UTF-8 LC_ALL= java -Djava.awt.headless=true -jar '$jar' open '$project/demo-data/rover-wheel.yaml' --catalog '$project/catalog'; echo YOKE-EXIT=\$?; sleep 120"
+
+wait_for "ranked" 90
+capture 01-shortlist
+
+# The cursor column starts on the binding margin; cost is eleven columns to the right.
+for i in 1 2 3 4 5 6 7 8 9 10 11; do keys Right; done
+keys s
+wait_for "sort cost asc" 10
+keys Home
+sleep 0.5
+capture 02-sorted-by-cost
+
+keys Enter
+wait_for "Pairing detail" 10
+sleep 0.5
+capture 03-detail
+keys Escape
+wait_for "shown /" 10
+
+keys x
+wait_for "export to CSV file: shortlist.csv" 10
+keys Enter
+wait_for "wrote " 30
+capture 04-exported
+
+keys '?'
+wait_for "Help: keys" 10
+capture 05-help
+keys q
+wait_for "shown /" 10
+
+keys c
+wait_for "Safety cautions" 10
+capture 06-cautions
+keys Escape
+wait_for "shown /" 10
+
+keys q
+wait_for "YOKE-EXIT=" 10
+capture 07-after-quit
