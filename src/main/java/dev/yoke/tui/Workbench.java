@@ -18,6 +18,11 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Set;
+import java.util.concurrent.CancellationException;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
 import java.util.concurrent.atomic.AtomicBoolean;
 import java.util.function.Function;
 
@@ -44,6 +49,17 @@ public final class Workbench {
     private ViewSettings view = ViewSettings.DEFAULT;
     private ShortlistGridModel gridModel;
 
+    /** Above this many rows a new sort or filter runs on the worker thread. */
+    private int sortOnScreenThreadLimit = 50_000;
+
+    private final ExecutorService viewWorker = Executors.newSingleThreadExecutor(r -> {
+        Thread t = new Thread(r, "yoke-view");
+        t.setDaemon(true);
+        return t;
+    });
+    private Future<ShortlistGridModel> pendingView;
+    private int pendingKeepRow;
+    private long lastProgressDraw;
     private BackgroundRanking ranking;
     private String message = "";
     private Prompt prompt;
@@ -118,6 +134,16 @@ public final class Workbench {
         gui.addWindow(shortlistWindow);
         gui.setActiveWindow(shortlistWindow);
         startRanking();
+    }
+
+    /** Shortlists larger than this are sorted and filtered on the worker thread (tests lower it). */
+    void setSortOnScreenThreadLimit(int rows) {
+        this.sortOnScreenThreadLimit = rows;
+    }
+
+    /** True while a sort or filter runs on the worker thread. */
+    public boolean isSorting() {
+        return pendingView != null;
     }
 
     /** Where the edit keys go. */
@@ -198,13 +224,19 @@ public final class Workbench {
      * @return true when something on screen changed
      */
     public boolean tick() {
+        boolean viewChanged = takeFinishedView();
         if (ranking == null) {
-            return false;
+            return viewChanged;
         }
         switch (ranking.state()) {
             case RUNNING -> {
-                messageBar.invalidate();
-                return true;
+                long now = System.nanoTime();
+                if (now - lastProgressDraw > 100_000_000L) {
+                    lastProgressDraw = now;
+                    messageBar.invalidate();
+                    return true;
+                }
+                return viewChanged;
             }
             case DONE -> {
                 Shortlist result = ranking.result();
@@ -212,11 +244,13 @@ public final class Workbench {
                     shortlist = result;
                     applyView(view, -1);
                     grid.setEmptyMessage("no pairing passes the filters (z clears them)");
-                    showMessage(String.format(Locale.ROOT, "ranked %d pairings in %.1f s", shortlist.evaluatedCount(),
-                            ranking.seconds()));
+                    if (pendingView == null) {
+                        showMessage(String.format(Locale.ROOT, "ranked %d pairings in %.1f s", shortlist.evaluatedCount(),
+                                ranking.seconds()));
+                    }
                     return true;
                 }
-                return false;
+                return viewChanged;
             }
             case CANCELLED, FAILED -> {
                 String text = ranking.state() == BackgroundRanking.State.CANCELLED
@@ -236,14 +270,56 @@ public final class Workbench {
         }
     }
 
-    /** Re-sorts and re-filters; keeps the cursor on the same pairing when it stays visible. */
+    /**
+     * Re-sorts and re-filters; keeps the cursor on the same pairing when it stays visible. Large
+     * shortlists are sorted on a worker thread (about a second at a million rows) while the
+     * screen keeps answering; the finished view is swapped in by {@link #tick()}.
+     */
     private void applyView(ViewSettings newView, int keepRow) {
         view = newView;
-        gridModel = ShortlistGridModel.of(shortlist, view, traits.glyphs(), suspectIds);
+        if (pendingView != null) {
+            pendingView.cancel(true);
+            pendingView = null;
+        }
+        Shortlist s = shortlist;
+        if (s == null || s.size() <= sortOnScreenThreadLimit) {
+            showView(ShortlistGridModel.of(s, view, traits.glyphs(), suspectIds), keepRow);
+            return;
+        }
+        ViewSettings v = view;
+        Set<String> suspects = suspectIds;
+        pendingView = viewWorker.submit(() -> ShortlistGridModel.of(s, v, traits.glyphs(), suspects));
+        pendingKeepRow = keepRow;
+        showMessage(String.format(Locale.ROOT, "sorting and filtering %d rows...", s.size()));
+        statusBar.invalidate();
+    }
+
+    private void showView(ShortlistGridModel model, int keepRow) {
+        gridModel = model;
         int cursor = keepRow >= 0 ? gridModel.gridRowOf(keepRow) : -1;
         grid.setModel(gridModel);
         grid.setCursorRow(Math.max(0, cursor));
         statusBar.invalidate();
+    }
+
+    /** Swaps in a view sorted on the worker thread, once it is ready. */
+    private boolean takeFinishedView() {
+        Future<ShortlistGridModel> f = pendingView;
+        if (f == null || !f.isDone()) {
+            return false;
+        }
+        pendingView = null;
+        try {
+            showView(f.get(), pendingKeepRow);
+            if (message.startsWith("sorting and filtering")) {
+                showMessage("");
+            }
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+        } catch (CancellationException | ExecutionException e) {
+            showMessage("could not sort: " + e.getMessage());
+        }
+        return true;
     }
 
     private int cursorRow() {
@@ -295,6 +371,7 @@ public final class Workbench {
 
     private void quit() {
         finished = true;
+        viewWorker.shutdownNow();
         if (ranking != null) {
             ranking.cancel();
         }

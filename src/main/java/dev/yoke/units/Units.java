@@ -48,6 +48,9 @@ public final class Units {
             }
             throw new UnitException("expected a number in " + expected.expectation() + ", got '" + trimmed + "'");
         }
+        if (m.group(1).length() > 100) {
+            throw new UnitException("'" + trimmed.substring(0, 20) + "...' has more than 100 digits");
+        }
         BigDecimal number;
         try {
             number = new BigDecimal(m.group(1));

@@ -386,4 +386,25 @@ class WorkbenchTest {
             assertEquals(2, h.backend.rankings);
         }
     }
+
+    @Test
+    void largeShortlistsSortOnAWorkerWhileTheScreenAnswers() throws Exception {
+        try (ScreenHarness h = new ScreenHarness(100, 30, TerminalTraits.PLAIN, dir).ranked()) {
+            h.workbench.setSortOnScreenThreadLimit(0);
+            selectColumn(h, ShortlistColumn.COST);
+            h.press(key('s'));
+            for (int i = 0; i < 500 && h.workbench.isSorting(); i++) {
+                h.press(KeyType.ArrowDown);
+                Thread.sleep(2);
+            }
+            h.press(KeyType.Home);
+            ShortlistGridModel m = h.workbench.gridModel();
+            assertFalse(h.workbench.isSorting());
+            assertEquals("cost asc", m.view().describeSort(), "the sorted view was swapped in");
+            for (int i = 1; i < m.rowCount(); i++) {
+                assertTrue(m.shortlist().value(m.shortlistRow(i - 1), Metric.COST)
+                        <= m.shortlist().value(m.shortlistRow(i), Metric.COST));
+            }
+        }
+    }
 }
