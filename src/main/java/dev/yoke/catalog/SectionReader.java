@@ -19,10 +19,6 @@ final class SectionReader {
         this.problems = problems;
     }
 
-    Path file() {
-        return file;
-    }
-
     void error(int line, int column, String field, String message) {
         problems.add(Problem.error(file, line, column, field, message));
     }

@@ -55,10 +55,10 @@ public final class RankCommand implements Callable<Integer> {
     Path catalogDir;
 
     @Option(names = "--sort", paramLabel = "KEY[,KEY...]",
-            description = {"Sort keys, most important first; KEY:desc sorts descending (KEY or KEY:asc ascending).",
-                    "Keys: motor, switch, pwm_frequency, gear_ratio, pareto and every metric, e.g. cost, total_loss,",
-                    "efficiency, junction_temp_max, binding_margin, margin_junction. NaN sorts last.",
-                    "Default: feasible:desc,total_loss,cost."})
+            description = "Sort keys, most important first; KEY:desc sorts descending (KEY or KEY:asc ascending). "
+                    + "Keys: motor, switch, pwm_frequency, gear_ratio, pareto and every metric, e.g. cost, total_loss, "
+                    + "efficiency, junction_temp_max, binding_margin, margin_junction. Missing values sort last. "
+                    + "Default: feasible:desc,total_loss,cost.")
     String sort;
 
     @Option(names = "--feasible-only", description = "Only pairings with no negative margin.")

@@ -40,7 +40,8 @@ public final class Ranking {
                 }
             }
         }
-        IntSort.sort(rows, count, new RowOrder(store, shortlist.ranks(), shortlist.paretoBits(), keys));
+        RowOrder full = new RowOrder(store, shortlist.ranks(), shortlist.paretoBits(), keys);
+        PrefixSort.sort(rows, count, store, shortlist.ranks(), shortlist.paretoBits(), keys, full);
         return count == n ? rows : Arrays.copyOf(rows, count);
     }
 

@@ -61,6 +61,27 @@ class RankingTest {
     }
 
     @Test
+    void packedPrefixSortAgreesWithTheComparatorOnTieHeavyKeys() {
+        // 12,000 rows; keys with few distinct values (feasible, binding, ratio, pareto) force long
+        // runs of equal prefixes that the full comparator must finish
+        Shortlist big = Sweep.all(new FakeEvaluator(60, 50, 2, 2, 77));
+        List<Reference.Row> rows = Reference.rows(big);
+        List<List<SortKey>> cases = List.of(
+                List.of(SortKey.descending(Column.of(Metric.FEASIBLE))),
+                List.of(SortKey.ascending(Column.of(Metric.BINDING)), SortKey.descending(Column.RATIO)),
+                List.of(SortKey.descending(Column.PARETO), SortKey.descending(Column.of(Metric.EFFICIENCY))),
+                List.of(SortKey.descending(Column.SWITCH), SortKey.ascending(Column.of(Metric.MARGIN_VDS))),
+                List.of(SortKey.ascending(Column.of(Metric.TOTAL_LOSS)), SortKey.descending(Column.of(Metric.COST)),
+                        SortKey.descending(Column.of(Metric.BINDING_MARGIN))),
+                List.of());
+        for (List<SortKey> keys : cases) {
+            List<Reference.Row> expected = new ArrayList<>(rows);
+            expected.sort(Reference.comparator(keys));
+            assertArrayEquals(expected.stream().mapToInt(Reference.Row::row).toArray(), Ranking.order(big, keys), "keys " + keys);
+        }
+    }
+
+    @Test
     void missingValuesSortLastInBothDirections() {
         for (boolean descending : new boolean[] {false, true}) {
             int[] order = Ranking.order(SHORTLIST, List.of(new SortKey(Column.of(Metric.EFFICIENCY), descending)));
