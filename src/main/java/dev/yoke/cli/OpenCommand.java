@@ -14,7 +14,7 @@ import dev.yoke.tui.EngineBackend;
 import dev.yoke.tui.TerminalSession;
 import dev.yoke.tui.TerminalTraits;
 import dev.yoke.tui.Workbench;
-import dev.yoke.tui.edit.ScenarioEditor;
+import dev.yoke.tui.edit.WorkbenchEditors;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
@@ -125,18 +125,8 @@ public final class OpenCommand implements Callable<Integer> {
         return YokeCommand.OK;
     }
 
-    /** The editors behind the workbench's edit keys. */
+    /** The editors behind the workbench's edit keys: they save through the catalog package's stores. */
     private EditorHooks editors() {
-        return new EditorHooks() {
-            @Override
-            public void openParts(Workbench workbench) {
-                workbench.showMessage("the parts editor needs the catalog store, which this build does not have yet");
-            }
-
-            @Override
-            public void openBench(Workbench workbench) {
-                ScenarioEditor.open(workbench.gui(), workbench.scenario(), scenarioFile, workbench::scenarioChanged);
-            }
-        };
+        return WorkbenchEditors.forFiles(catalogDir, scenarioFile);
     }
 }

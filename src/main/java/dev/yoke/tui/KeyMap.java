@@ -198,26 +198,49 @@ public final class KeyMap {
         return space < 0 ? k : k.substring(0, space);
     }
 
-    /** Help text: for each screen its title, then one line per key. */
+    /** Keys longer than this go on a line of their own in help, the description below them. */
+    private static final int HELP_KEY_WIDTH = 10;
+
+    /** Help text: for each screen its title, then one line per key (two when the keys are long). */
     public static List<String> helpLines() {
         List<String> lines = new ArrayList<>();
-        int keyWidth = 0;
-        for (Action a : Action.values()) {
-            keyWidth = Math.max(keyWidth, a.keys().length());
-        }
         for (View screen : new View[] {View.SHORTLIST, View.DETAIL, View.PAGE, View.DIALOG}) {
             lines.add(screen.title());
             for (Action a : Action.values()) {
                 if (a.view() == screen) {
-                    lines.add("  " + pad(a.keys(), keyWidth) + "  " + a.description());
+                    addHelpLine(lines, a);
                 }
             }
             lines.add("");
         }
         lines.add("Everywhere but in dialogs");
-        lines.add("  " + pad(Action.HELP.keys(), keyWidth) + "  " + Action.HELP.description());
-        lines.add("  " + pad(Action.CAUTIONS.keys(), keyWidth) + "  " + Action.CAUTIONS.description());
+        addHelpLine(lines, Action.HELP);
+        addHelpLine(lines, Action.CAUTIONS);
         return lines;
+    }
+
+    private static void addHelpLine(List<String> lines, Action a) {
+        if (a.keys().length() > HELP_KEY_WIDTH) {
+            lines.add("  " + a.keys());
+            lines.add("  " + " ".repeat(HELP_KEY_WIDTH) + "  " + a.description());
+        } else {
+            lines.add("  " + pad(a.keys(), HELP_KEY_WIDTH) + "  " + a.description());
+        }
+    }
+
+    /** The keys as a Markdown table per screen, for the documentation (docs/keys.md is checked against it). */
+    public static String markdown() {
+        StringBuilder md = new StringBuilder();
+        for (View screen : new View[] {View.SHORTLIST, View.DETAIL, View.PAGE, View.DIALOG, null}) {
+            md.append("\n### ").append(screen == null ? "Everywhere but in dialogs" : screen.title()).append("\n\n");
+            md.append("| keys | what they do |\n|---|---|\n");
+            for (Action a : Action.values()) {
+                if (a.view() == screen) {
+                    md.append("| `").append(a.keys().replace("|", "\\|")).append("` | ").append(a.description()).append(" |\n");
+                }
+            }
+        }
+        return md.toString();
     }
 
     static String pad(String s, int width) {

@@ -34,15 +34,17 @@ final class ChoiceWindow extends BasicWindow {
      * Shows the question.
      *
      * @param answers button label to action, in order; the first has the focus
+     * @param unicode whether the terminal shows Unicode (else symbols are spelt in ASCII)
      */
-    static ChoiceWindow ask(WindowBasedTextGUI gui, String title, String message, LinkedHashMap<String, Runnable> answers) {
+    static ChoiceWindow ask(WindowBasedTextGUI gui, String title, String message, LinkedHashMap<String, Runnable> answers,
+                            boolean unicode) {
         Runnable last = () -> { };
         for (Runnable r : answers.values()) {
             last = r;
         }
         ChoiceWindow window = new ChoiceWindow(title, last);
         Panel panel = new Panel(new LinearLayout(Direction.VERTICAL));
-        panel.addComponent(new Label(wrap(message, 60)));
+        panel.addComponent(new Label(wrap(AsciiText.of(message, unicode), 60)));
         Panel buttons = new Panel(new LinearLayout(Direction.HORIZONTAL));
         for (Map.Entry<String, Runnable> a : answers.entrySet()) {
             Runnable action = a.getValue();

@@ -49,6 +49,7 @@ public final class FieldForm extends AbstractInteractableComponent<FieldForm> {
     private int top;
     private int selectedLine;
     private int valueWidth = MIN_VALUE_WIDTH;
+    private boolean unicode = true;
     private boolean changedSinceCommit;
     private Consumer<FieldForm> editListener = f -> { };
     private Consumer<FieldForm> commitListener = f -> { };
@@ -132,6 +133,13 @@ public final class FieldForm extends AbstractInteractableComponent<FieldForm> {
     /** Moves the cursor to a field. */
     public synchronized FieldForm select(String key) {
         moveTo(indexOf(key));
+        return this;
+    }
+
+    /** Whether units and messages may use Unicode symbols; when not they are spelt in ASCII. */
+    public synchronized FieldForm setUnicode(boolean on) {
+        this.unicode = on;
+        invalidate();
         return this;
     }
 
@@ -388,7 +396,8 @@ public final class FieldForm extends AbstractInteractableComponent<FieldForm> {
                         String p = form.problems.get(form.fields.get(entry[0]).key());
                         int x = 4 + form.labelWidth + 1;
                         g.putString(2, line, "!");
-                        g.putString(x, line, TerminalTextUtils.fitString("! " + p, Math.max(0, width - x)));
+                        g.putString(x, line, TerminalTextUtils.fitString(AsciiText.of("! " + p, form.unicode),
+                                Math.max(0, width - x)));
                     }
                 }
                 if (form.top > 0) {
@@ -434,10 +443,10 @@ public final class FieldForm extends AbstractInteractableComponent<FieldForm> {
             }
             g.putString(x + 1 + form.valueWidth, line, "]");
             int ux = x + form.valueWidth + 3;
-            g.putString(ux, line, f.unit());
+            g.putString(ux, line, AsciiText.of(f.unit(), form.unicode));
             int mx = ux + form.unitWidth + 2;
             if (problem != null && !messageBelow && mx < width) {
-                g.putString(mx, line, TerminalTextUtils.fitString("! " + problem, width - mx));
+                g.putString(mx, line, TerminalTextUtils.fitString(AsciiText.of("! " + problem, form.unicode), width - mx));
             }
         }
     }

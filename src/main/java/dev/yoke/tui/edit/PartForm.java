@@ -40,6 +40,7 @@ final class PartForm extends BasicWindow {
     private final Label status = new Label("");
     private final Label state = new Label("");
     private String message = "";
+    private boolean unicode = true;
 
     private PartForm(WindowBasedTextGUI gui, PartsEditor editor, EditablePart<Object> kind, Map<String, Object> values,
                      String replacedId, List<Path> files, Set<String> takenIds) {
@@ -109,14 +110,14 @@ final class PartForm extends BasicWindow {
     private void refresh() {
         String what = replacedId == null ? "NEW " + kind.noun().toUpperCase()
                 : "EDIT " + kind.noun().toUpperCase() + " " + replacedId;
-        title.setText(what + (replacedId == null ? "" : "   file " + files.get(0)));
-        status.setText(form.selectedStatus());
+        show(title, what + (replacedId == null ? "" : "   file " + files.get(0)));
+        show(status, form.selectedStatus());
         if (!message.isEmpty()) {
-            state.setText(message);
+            show(state, message);
         } else if (form.problems().isEmpty()) {
-            state.setText("All fields valid: F2 saves.");
+            show(state, "All fields valid: F2 saves.");
         } else {
-            state.setText("Cannot save, " + form.problemSummary() + " (marked !)");
+            show(state, "Cannot save, " + form.problemSummary() + " (marked !)");
         }
     }
 
@@ -174,6 +175,21 @@ final class PartForm extends BasicWindow {
         LinkedHashMap<String, Runnable> answers = new LinkedHashMap<>();
         answers.put("Discard", this::close);
         answers.put("Keep editing", this::refresh);
-        ChoiceWindow.ask(gui, "Unsaved " + kind.noun(), "Discard the changes to this " + kind.noun() + "?", answers);
+        ChoiceWindow.ask(gui, "Unsaved " + kind.noun(), "Discard the changes to this " + kind.noun() + "?", answers, unicode);
+    }
+
+    /**
+     * Whether the terminal shows Unicode; when not, unit symbols and marks are spelt in ASCII
+     * ({@code Ohm}, {@code degC}, {@code N*m}) so nothing prints as '?'.
+     */
+    public PartForm useUnicode(boolean on) {
+        this.unicode = on;
+        form.setUnicode(on);
+        refresh();
+        return this;
+    }
+
+    private void show(Label label, String text) {
+        label.setText(AsciiText.of(text, unicode));
     }
 }

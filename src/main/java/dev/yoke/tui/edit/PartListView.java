@@ -21,6 +21,7 @@ final class PartListView extends AbstractComponent<PartListView> {
     private int selected;
     private int top;
     private int rows;
+    private boolean unicode = true;
 
     PartListView(int rows) {
         this.rows = Math.max(2, rows);
@@ -37,6 +38,11 @@ final class PartListView extends AbstractComponent<PartListView> {
             top = selected - visible + 1;
         }
         top = Math.max(0, Math.min(top, Math.max(0, parts.size() - visible)));
+        invalidate();
+    }
+
+    synchronized void setUnicode(boolean on) {
+        this.unicode = on;
         invalidate();
     }
 
@@ -82,7 +88,7 @@ final class PartListView extends AbstractComponent<PartListView> {
         for (EditablePart.Column<Object> c : v.kind.columns()) {
             head.append(' ').append(padLeft(c.header(), c.width()));
         }
-        g.putString(0, 0, TerminalTextUtils.fitString(head.toString(), width));
+        g.putString(0, 0, TerminalTextUtils.fitString(AsciiText.of(head.toString(), v.unicode), width));
         if (v.parts.isEmpty()) {
             g.putString(2, 1, "(no " + v.kind.plural() + " to show)");
         }
@@ -101,7 +107,7 @@ final class PartListView extends AbstractComponent<PartListView> {
             if (i == v.selected) {
                 g.applyThemeStyle(v.getThemeDefinition().getSelected());
             }
-            g.putString(0, line, TerminalTextUtils.fitString(b.toString(), width));
+            g.putString(0, line, TerminalTextUtils.fitString(AsciiText.of(b.toString(), v.unicode), width));
             g.applyThemeStyle(v.getThemeDefinition().getNormal());
         }
         if (v.top > 0) {

@@ -1,5 +1,6 @@
 package dev.yoke.tui.edit;
 
+import dev.yoke.catalog.ChangedOnDiskException;
 import dev.yoke.model.Catalog;
 
 import java.io.IOException;
@@ -58,20 +59,4 @@ public interface PartStore {
 
     /** Reads every file again from disk, forgetting what was loaded before. */
     void reload() throws IOException;
-
-    /** A file changed by someone else since it was loaded. */
-    final class ChangedOnDiskException extends Exception {
-
-        private final transient Path file;
-
-        public ChangedOnDiskException(Path file) {
-            super(file + " changed on disk since it was loaded");
-            this.file = file;
-        }
-
-        /** The changed file. */
-        public Path file() {
-            return file;
-        }
-    }
 }

@@ -10,6 +10,8 @@ import com.googlecode.lanterna.gui2.WindowBasedTextGUI;
 import com.googlecode.lanterna.input.KeyStroke;
 import com.googlecode.lanterna.input.KeyType;
 
+import dev.yoke.catalog.ChangedOnDiskException;
+
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -51,6 +53,7 @@ public final class PartsEditor extends BasicWindow {
     private int selected;
     private List<Object> shown = List.of();
     private String message = "";
+    private boolean unicode = true;
 
     private PartsEditor(WindowBasedTextGUI gui, PartStore store, Runnable onSaved) {
         super("Parts");
@@ -123,18 +126,18 @@ public final class PartsEditor extends BasicWindow {
                 : "motors " + motorCount + "  [SWITCHES " + switchCount + "]";
         String filterText = filtering ? "filter: " + filter + "_"
                 : filter.isEmpty() ? "" : "filter: " + filter + " (" + shown.size() + " of " + all.size() + ")";
-        title.setText("PARTS  " + tabs + "   " + filterText);
+        show(title, "PARTS  " + tabs + "   " + filterText);
         if (!message.isEmpty()) {
-            status.setText(message);
+            show(status, message);
         } else if (shown.isEmpty()) {
-            status.setText(filter.isEmpty() ? "No " + kind.plural() + " yet: a adds one."
+            show(status, filter.isEmpty() ? "No " + kind.plural() + " yet: a adds one."
                     : "Nothing matches '" + filter + "'.");
         } else {
             Object p = shown.get(selected);
-            status.setText(kind.noun() + " " + kind.id(p) + " in "
+            show(status, kind.noun() + " " + kind.id(p) + " in "
                     + store.fileOf(kind.id(p)).map(Path::toString).orElse("(no file)"));
         }
-        keys.setText(filtering ? FILTER_KEYS : LIST_KEYS);
+        show(keys, filtering ? FILTER_KEYS : LIST_KEYS);
     }
 
     @Override
@@ -256,12 +259,12 @@ public final class PartsEditor extends BasicWindow {
         Path file = store.fileOf(id).orElse(defaultFile());
         Set<String> others = allIds();
         others.remove(id);
-        PartForm.open(gui, this, kind, kind.values(part), id, List.of(file), others);
+        PartForm.open(gui, this, kind, kind.values(part), id, List.of(file), others).useUnicode(unicode);
     }
 
     private void add() {
         Map<String, Object> blank = new LinkedHashMap<>();
-        PartForm.open(gui, this, kind, blank, null, filesWithFirst(defaultFile()), allIds());
+        PartForm.open(gui, this, kind, blank, null, filesWithFirst(defaultFile()), allIds()).useUnicode(unicode);
     }
 
     private void copy() {
@@ -273,7 +276,7 @@ public final class PartsEditor extends BasicWindow {
         Set<String> ids = allIds();
         values.put("id", freshId(kind.id(part), ids));
         Path from = store.fileOf(kind.id(part)).orElse(defaultFile());
-        PartForm.open(gui, this, kind, values, null, filesWithFirst(from), ids);
+        PartForm.open(gui, this, kind, values, null, filesWithFirst(from), ids).useUnicode(unicode);
     }
 
     /** {@code id-copy}, {@code id-copy2}, … whichever is free. */
@@ -312,7 +315,7 @@ public final class PartsEditor extends BasicWindow {
         answers.put("Keep", () -> { });
         ChoiceWindow.ask(gui, "Delete " + kind.noun(),
                 "Delete " + kind.noun() + " " + id + " from " + file.getFileName()
-                        + "? The previous file is kept as " + file.getFileName() + ".bak.", answers);
+                        + "? The previous file is kept as " + file.getFileName() + ".bak.", answers, unicode);
     }
 
     /**
@@ -322,10 +325,10 @@ public final class PartsEditor extends BasicWindow {
     void write(PartChange change, Consumer<String> done) {
         try {
             store.apply(change);
-            written(change, "Saved " + describe(change) + " to " + change.file()
+            written(change, "Saved " + describe(change) + " to " + change.file().getFileName()
                     + " (previous version in " + change.file().getFileName() + ".bak)");
             done.accept(null);
-        } catch (PartStore.ChangedOnDiskException e) {
+        } catch (ChangedOnDiskException e) {
             askAboutConflict(change, e.file(), done);
         } catch (IOException | RuntimeException e) {
             message = "NOT saved: " + change.file() + ": " + e.getMessage();
@@ -352,7 +355,7 @@ public final class PartsEditor extends BasicWindow {
         }
         answers.put("Back", () -> done.accept("NOT saved: " + file + " changed on disk; nothing written"));
         ChoiceWindow.ask(gui, "File changed on disk",
-                file + " was changed by someone else since it was loaded.", answers);
+                file + " was changed by someone else since it was loaded.", answers, unicode);
     }
 
     private void keepBoth(PartChange change, Path file, Consumer<String> done) {
@@ -392,5 +395,20 @@ public final class PartsEditor extends BasicWindow {
             return kind.noun() + " " + kind.id(put.part());
         }
         return "deletion of " + kind.noun() + " " + ((PartChange.Remove) change).id();
+    }
+
+    /**
+     * Whether the terminal shows Unicode; when not, unit symbols and marks are spelt in ASCII
+     * ({@code Ohm}, {@code degC}, {@code N*m}) so nothing prints as '?'.
+     */
+    public PartsEditor useUnicode(boolean on) {
+        this.unicode = on;
+        list.setUnicode(on);
+        refresh();
+        return this;
+    }
+
+    private void show(Label label, String text) {
+        label.setText(AsciiText.of(text, unicode));
     }
 }

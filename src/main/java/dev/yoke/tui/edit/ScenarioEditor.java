@@ -10,6 +10,7 @@ import com.googlecode.lanterna.gui2.Window;
 import com.googlecode.lanterna.gui2.WindowBasedTextGUI;
 import com.googlecode.lanterna.input.KeyStroke;
 import com.googlecode.lanterna.input.KeyType;
+import dev.yoke.catalog.ChangedOnDiskException;
 import dev.yoke.model.Scenario;
 import dev.yoke.model.Segment;
 import dev.yoke.units.Dimension;
@@ -55,6 +56,7 @@ public final class ScenarioEditor extends BasicWindow {
     private Scenario passedOn;
     private Scenario saved;
     private String message = "";
+    private boolean unicode = true;
 
     private ScenarioEditor(WindowBasedTextGUI gui, Scenario scenario, Path file, Consumer<Scenario> onChange,
                            ScenarioSaver saver) {
@@ -94,6 +96,8 @@ public final class ScenarioEditor extends BasicWindow {
 
     /**
      * Opens the editor on top of the workbench, saving through the catalog package's scenario writer.
+     * The file as it is on disk now counts as the version being edited: if someone else changes it
+     * before F2, the editor asks before overwriting.
      *
      * @param gui      the workbench's window manager
      * @param scenario what the workbench ranks now
@@ -102,7 +106,7 @@ public final class ScenarioEditor extends BasicWindow {
      */
     public static ScenarioEditor open(WindowBasedTextGUI gui, Scenario scenario, Path file,
                                       Consumer<Scenario> onChange) {
-        return open(gui, scenario, file, onChange, ScenarioFiles.defaultSaver());
+        return open(gui, scenario, file, onChange, ScenarioFiles.startingFromDisk(file));
     }
 
     /** Like {@link #open(WindowBasedTextGUI, Scenario, Path, Consumer)} with the file writer given. */
@@ -152,15 +156,38 @@ public final class ScenarioEditor extends BasicWindow {
         passOn();
         try {
             saver.save(s.get(), file);
-            saved = s.get();
-            message = "Saved " + file.getFileName() + " (previous version kept as "
-                    + file.getFileName() + ".bak)";
-        } catch (IOException e) {
+            savedAs(s.get(), "");
+        } catch (ChangedOnDiskException e) {
+            askAboutChangedFile(s.get());
+        } catch (IOException | RuntimeException e) {
             message = "Not saved: " + file + ": " + e.getMessage();
-        } catch (RuntimeException e) {
-            message = "Not saved: " + e.getMessage();
         }
         refresh();
+    }
+
+    private void savedAs(Scenario scenario, String note) {
+        saved = scenario;
+        message = "Saved " + file.getFileName() + note + " (previous version kept as " + file.getFileName() + ".bak)";
+    }
+
+    private void askAboutChangedFile(Scenario scenario) {
+        LinkedHashMap<String, Runnable> answers = new LinkedHashMap<>();
+        answers.put("Overwrite", () -> {
+            try {
+                saver.overwrite(scenario, file);
+                savedAs(scenario, " over the other version");
+            } catch (IOException | RuntimeException e) {
+                message = "Not saved: " + file + ": " + e.getMessage();
+            }
+            refresh();
+        });
+        answers.put("Back", () -> {
+            message = "Not saved: " + file.getFileName() + " changed on disk; your edits are still here";
+            refresh();
+        });
+        ChoiceWindow.ask(gui, "Scenario file changed on disk", file + " was changed by someone else since it was"
+                + " read. Overwrite it? The other version is then kept as " + file.getFileName() + ".bak.",
+                answers, unicode);
     }
 
     private String summary() {
@@ -175,7 +202,7 @@ public final class ScenarioEditor extends BasicWindow {
 
     private void refresh() {
         String name = form.text(ScenarioFields.NAME);
-        title.setText("SCENARIO " + name + "   file " + (file == null ? "(none)" : file.toString()));
+        show(title, "SCENARIO " + name + "   file " + (file == null ? "(none)" : file.toString()));
         double cycle = 0;
         Optional<List<Segment>> segments = table.segments();
         if (segments.isPresent()) {
@@ -183,20 +210,20 @@ public final class ScenarioEditor extends BasicWindow {
                 cycle += seg.duration();
             }
         }
-        heading.setText("PROFILE SEGMENTS  " + table.size() + " segments"
+        show(heading, "PROFILE SEGMENTS  " + table.size() + " segments"
                 + (segments.isPresent() ? ", cycle " + Units.format(cycle, Dimension.TIME) : ""));
         boolean inTable = getFocusedInteractable() == table;
-        status.setText(inTable ? table.selectedStatus() : form.selectedStatus());
+        show(status, inTable ? table.selectedStatus() : form.selectedStatus());
         String problems = summary();
         String fileState = Objects.equals(current().orElse(null), saved) ? "file up to date" : "unsaved (F2 saves)";
         if (!message.isEmpty()) {
-            state.setText(message);
+            show(state, message);
         } else if (problems.isEmpty()) {
-            state.setText("All values valid, passed to the ranking; " + fileState + ".");
+            show(state, "All values valid, passed to the ranking; " + fileState + ".");
         } else {
-            state.setText("NOT passed on: " + problems);
+            show(state, "NOT passed on: " + problems);
         }
-        keys.setText(inTable ? (table.isEditing() ? EDIT_KEYS : TABLE_KEYS) : FORM_KEYS);
+        show(keys, inTable ? (table.isEditing() ? EDIT_KEYS : TABLE_KEYS) : FORM_KEYS);
     }
 
     @Override
@@ -234,6 +261,21 @@ public final class ScenarioEditor extends BasicWindow {
         answers.put("Stay", this::refresh);
         ChoiceWindow.ask(gui, "Scenario file not saved",
                 current().isPresent() ? "The file is older than the screen. Save it?"
-                        : "Some values are invalid and the file is older than the screen.", answers);
+                        : "Some values are invalid and the file is older than the screen.", answers, unicode);
+    }
+
+    /**
+     * Whether the terminal shows Unicode; when not, unit symbols and marks are spelt in ASCII
+     * ({@code Ohm}, {@code degC}, {@code N*m}) so nothing prints as '?'.
+     */
+    public ScenarioEditor useUnicode(boolean on) {
+        this.unicode = on;
+        form.setUnicode(on);
+        refresh();
+        return this;
+    }
+
+    private void show(Label label, String text) {
+        label.setText(AsciiText.of(text, unicode));
     }
 }

@@ -21,7 +21,7 @@ import java.util.function.Consumer;
  * The duty profile's segments as an editable table: one row per segment, one column per value,
  * each cell read with its unit like a form field.
  *
- * <p>Keys: arrows move between cells; Enter (or F2) edits the cell, then typing changes it with
+ * <p>Keys: arrows move between cells; Enter edits the cell, then typing changes it with
  * its message updated at every key, Enter or Tab keeps it, Esc puts the old text back;
  * {@code a}/Insert adds a segment below (a copy of the current one), {@code x}/Delete removes
  * the current one, {@code [} and {@code ]} move it up and down.
@@ -256,6 +256,9 @@ public final class SegmentTable extends AbstractInteractableComponent<SegmentTab
                 case Escape:
                     finishEdit(false);
                     return Result.HANDLED;
+                case F2:
+                    finishEdit(true);
+                    return Result.UNHANDLED; // the window saves
                 case Tab:
                     finishEdit(true);
                     if (column < COLUMNS.size() - 1) {
@@ -319,7 +322,6 @@ public final class SegmentTable extends AbstractInteractableComponent<SegmentTab
                 row = Math.max(0, Math.min(rows.size() - 1, row + visibleRows));
                 break;
             case Enter:
-            case F2:
                 startEdit();
                 return Result.HANDLED;
             case Insert:

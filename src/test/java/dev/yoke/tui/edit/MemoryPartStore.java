@@ -56,9 +56,9 @@ final class MemoryPartStore implements PartStore {
     }
 
     @Override
-    public void apply(PartChange change) throws IOException, ChangedOnDiskException {
+    public void apply(PartChange change) throws IOException, dev.yoke.catalog.ChangedOnDiskException {
         if (changedOnDisk != null && changedOnDisk.equals(change.file())) {
-            throw new ChangedOnDiskException(changedOnDisk);
+            throw new dev.yoke.catalog.ChangedOnDiskException(changedOnDisk);
         }
         applied.add(change);
         if (change instanceof PartChange.Put put) {

@@ -214,4 +214,23 @@ class PartsEditorTest {
             assertTrue(t.text().contains("EDIT MOTOR m24-small"), "Esc on the question keeps editing");
         }
     }
+
+    @Test
+    void asciiTerminalGetsUnitsSpeltInAscii() throws Exception {
+        try (TerminalDriver t = new TerminalDriver(80, 24)) {
+            PartsEditor.open(t.gui, store(), saves::incrementAndGet).useUnicode(false);
+            t.update();
+            assertOnlyAscii(t.text());
+            t.press(KeyType.Enter).press(KeyType.ArrowDown, 3).clearField(12).type("4.7 mH");
+            String screen = t.text();
+            assertOnlyAscii(screen);
+            assertTrue(screen.contains("expected ohms (Ohm, Ohm)") || screen.contains("expected ohms"), screen);
+        }
+    }
+
+    private static void assertOnlyAscii(String screen) {
+        for (int i = 0; i < screen.length(); i++) {
+            assertTrue(screen.charAt(i) < 128, "non-ASCII '" + screen.charAt(i) + "' in\n" + screen);
+        }
+    }
 }

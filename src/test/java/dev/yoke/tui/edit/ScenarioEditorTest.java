@@ -23,7 +23,7 @@ class ScenarioEditorTest {
 
     private ScenarioEditor open(TerminalDriver t) {
         ScenarioEditor editor = ScenarioEditor.open(t.gui, DemoScenario.conveyor(), FILE, passed::add,
-                (scenario, file) -> saved.add(scenario));
+                new RecordingSaver(saved, null));
         t.update();
         return editor;
     }
@@ -167,9 +167,7 @@ class ScenarioEditorTest {
     void saveFailureIsReportedAndTheEditorStays() throws Exception {
         try (TerminalDriver t = new TerminalDriver(80, 24)) {
             ScenarioEditor editor = ScenarioEditor.open(t.gui, DemoScenario.conveyor(), FILE, passed::add,
-                    (scenario, file) -> {
-                        throw new IOException("disk full");
-                    });
+                    new RecordingSaver(saved, new IOException("disk full")));
             t.press(KeyType.F2);
             assertTrue(t.text().contains("Not saved: conveyor.yaml: disk full"), t.text());
             assertTrue(t.gui.getWindows().contains(editor));
