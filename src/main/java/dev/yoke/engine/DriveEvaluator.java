@@ -135,15 +135,22 @@ public final class DriveEvaluator implements PairingEvaluator {
                     loss = cellLoss(s, a, b);
                 }
                 bridge += cells[c + 4] * loss;
-                lossMax = Math.max(lossMax, loss);
+                if (loss > lossMax) {
+                    lossMax = loss;
+                }
             }
             double tjPiece = ta + rth * lossMax;
             if (pieceRunaway) {
                 runaway = true;
                 tjPiece = Math.max(tjPiece, s.runawayJunctionTemp);
             }
-            tjMax = Math.max(tjMax, tjPiece);
-            headroom = Math.min(headroom, plan.availableVoltage - needed[k] - 2 * absCurrent[k] * s.rdsOnAt(tjPiece));
+            if (tjPiece > tjMax) {
+                tjMax = tjPiece;
+            }
+            double left = plan.availableVoltage - needed[k] - 2 * absCurrent[k] * s.rdsOnAt(tjPiece);
+            if (left < headroom) {
+                headroom = left;
+            }
         }
         fill(plan, s, row, bridge, tjMax, headroom, runaway);
     }
