@@ -112,7 +112,7 @@ public final class DriveEvaluator implements PairingEvaluator {
         double[] cells = plan.cells;
         double[] needed = plan.neededVoltage;
         double[] absCurrent = plan.absCurrent;
-        int perPiece = plan.distinct.length * MotorSidePlan.CELL;
+        int[] pieceEnd = plan.pieceEnd;
         int n = plan.n;
         double ta = ambient;
         double bridge = 0;
@@ -123,7 +123,7 @@ public final class DriveEvaluator implements PairingEvaluator {
         for (int k = 0; k < n; k++) {
             double lossMax = 0;
             boolean pieceRunaway = false;
-            for (int end = c + perPiece; c < end; c += MotorSidePlan.CELL) {
+            for (int end = pieceEnd[k]; c < end; c += MotorSidePlan.CELL) {
                 double a = cells[c];
                 double b = cells[c + 1] * fixed + cells[c + 2] * edge + cells[c + 3] * diode;
                 double stability = 1.0 - factor * a;
@@ -135,15 +135,22 @@ public final class DriveEvaluator implements PairingEvaluator {
                     loss = cellLoss(s, a, b);
                 }
                 bridge += cells[c + 4] * loss;
-                lossMax = Math.max(lossMax, loss);
+                if (loss > lossMax) {
+                    lossMax = loss;
+                }
             }
             double tjPiece = ta + rth * lossMax;
             if (pieceRunaway) {
                 runaway = true;
                 tjPiece = Math.max(tjPiece, s.runawayJunctionTemp);
             }
-            tjMax = Math.max(tjMax, tjPiece);
-            headroom = Math.min(headroom, plan.availableVoltage - needed[k] - 2 * absCurrent[k] * s.rdsOnAt(tjPiece));
+            if (tjPiece > tjMax) {
+                tjMax = tjPiece;
+            }
+            double left = plan.availableVoltage - needed[k] - 2 * absCurrent[k] * s.rdsOnAt(tjPiece);
+            if (left < headroom) {
+                headroom = left;
+            }
         }
         fill(plan, s, row, bridge, tjMax, headroom, runaway);
     }

@@ -72,8 +72,10 @@ final class MotorSidePlan implements PairingEvaluator.MotorSide {
     final double[] freeCurrent;
     /** Doubles per fast-path cell: conduction, hard, hard × |I|, freewheel × |I|, cycle weight × multiplicity. */
     static final int CELL = 5;
-    /** Fast-path cells: for each piece, for each distinct position, {@link #CELL} doubles. */
+    /** Fast-path cells: for each piece, for each distinct busy position, {@link #CELL} doubles. */
     final double[] cells;
+    /** Offset in {@link #cells} just past each piece's cells. */
+    final int[] pieceEnd;
     /** Positions whose coefficients differ, and how many positions each stands for. */
     final int[] distinct;
     final int[] multiplicity;
@@ -145,6 +147,7 @@ final class MotorSidePlan implements PairingEvaluator.MotorSide {
         double frictionTorque = motor.frictionTorque();
         double loadInertia = profile.loadInertia();
         double r20 = Copper.resistance20(motor.resistance(), motor.resistanceTemp());
+        RippleCache ripples = new RippleCache(modulation, bus, motor.inductance(), frequency);
 
         // Mechanics: constant within a piece.
         double[] housingLoss = new double[n];
@@ -186,7 +189,7 @@ final class MotorSidePlan implements PairingEvaluator.MotorSide {
         for (int pass = 0; pass < THERMAL_PASSES; pass++) {
             for (int k = 0; k < n; k++) {
                 double r = Copper.resistanceAt(motor.resistance(), motor.resistanceTemp(), windingMeanTemp[k]);
-                double ms = current[k] * current[k] + rippleVariance(modulation, bus, r, k, kt, motor);
+                double ms = current[k] * current[k] + rippleVariance(ripples, modulation, bus, r, k, kt, motor);
                 lossAtAmbient[k] = ms * r20 * (1 + Copper.ALPHA_20 * (ambient - Copper.REFERENCE_TEMP));
                 lossSlope[k] = ms * r20 * Copper.ALPHA_20;
             }
@@ -234,7 +237,7 @@ final class MotorSidePlan implements PairingEvaluator.MotorSide {
             duty = Math.max(duty, Math.max(ConductionPattern.highSideDuty(modulation, v0 / bus),
                     ConductionPattern.highSideDuty(modulation, v1 / bus)));
 
-            double variance = rippleVariance(modulation, bus, r, k, kt, motor);
+            double variance = rippleVariance(ripples, modulation, bus, r, k, kt, motor);
             double ms = i * i + variance;
             meanSquare[k] = ms;
             sumSquare += weight[k] * ms;
@@ -248,9 +251,9 @@ final class MotorSidePlan implements PairingEvaluator.MotorSide {
                 lo = 0;
             }
             double dStar = Math.max(lo, Math.min(hi, 0.5));
-            RippleWaveform w0 = waveform(modulation, bus, r, d0);
-            RippleWaveform w1 = waveform(modulation, bus, r, d1);
-            RippleWaveform ws = waveform(modulation, bus, r, dStar);
+            RippleWaveform w0 = ripples.get(r, d0);
+            RippleWaveform w1 = ripples.get(r, d1);
+            RippleWaveform ws = ripples.get(r, dStar);
             ripple[k] = Math.max(ws.peakToPeak(), Math.max(w0.peakToPeak(), w1.peakToPeak()));
             peak[k] = Math.max(ws.peak(i), Math.max(w0.peak(i), w1.peak(i)));
             rippleWorst = Math.max(rippleWorst, ripple[k]);
@@ -345,20 +348,27 @@ final class MotorSidePlan implements PairingEvaluator.MotorSide {
         distinct = java.util.Arrays.copyOf(rep, count);
         multiplicity = java.util.Arrays.copyOf(mult, count);
 
-        // The fast path's cells, piece by piece, distinct positions only, interleaved for locality.
-        cells = new double[CELL * n * count];
+        // The fast path's cells, piece by piece, distinct positions only, interleaved for locality; a position
+        // idle for a whole piece (no current, no edges) loses nothing and is left out.
+        double[] packed = new double[CELL * n * count];
+        pieceEnd = new int[n];
         int c = 0;
         for (int k = 0; k < n; k++) {
             for (int j = 0; j < count; j++) {
                 int at = 4 * k + rep[j];
-                cells[c] = conduction[at];
-                cells[c + 1] = hard[at];
-                cells[c + 2] = hardCurrent[at];
-                cells[c + 3] = freeCurrent[at];
-                cells[c + 4] = weight[k] * mult[j];
+                if (conduction[at] == 0 && hard[at] == 0 && freeCurrent[at] == 0) {
+                    continue;
+                }
+                packed[c] = conduction[at];
+                packed[c + 1] = hard[at];
+                packed[c + 2] = hardCurrent[at];
+                packed[c + 3] = freeCurrent[at];
+                packed[c + 4] = weight[k] * mult[j];
                 c += CELL;
             }
+            pieceEnd[k] = c;
         }
+        cells = java.util.Arrays.copyOf(packed, c);
     }
 
     private boolean samePosition(int a, int b) {
@@ -387,36 +397,50 @@ final class MotorSidePlan implements PairingEvaluator.MotorSide {
         switchingCount[k] += share * pattern.switchingCount();
     }
 
-    // The last few waveforms, keyed by resistance and on-fraction: ramps and constant-speed pieces repeat them.
-    private final double[] memoResistance = new double[4];
-    private final double[] memoOnFraction = new double[4];
-    private final RippleWaveform[] memoWaveform = new RippleWaveform[4];
-    private int memoNext;
+    /**
+     * The last few ripple waveforms of one motor side, keyed by resistance and on-fraction: ramps and
+     * constant-speed pieces ask for the same ones again. Used only while a plan is built.
+     */
+    private static final class RippleCache {
+        private final double swing;
+        private final double inductance;
+        private final double period;
+        private final double[] resistance = new double[4];
+        private final double[] onFraction = new double[4];
+        private final RippleWaveform[] waveform = new RippleWaveform[4];
+        private int next;
 
-    private RippleWaveform waveform(Modulation modulation, double bus, double r, double onFraction) {
-        for (int j = 0; j < memoWaveform.length; j++) {
-            if (memoWaveform[j] != null && memoResistance[j] == r && memoOnFraction[j] == onFraction) {
-                return memoWaveform[j];
-            }
+        RippleCache(Modulation modulation, double bus, double inductance, double frequency) {
+            this.swing = ConductionPattern.rippleSwing(modulation) * bus;
+            this.inductance = inductance;
+            this.period = ConductionPattern.ripplePeriodFactor(modulation) / frequency;
         }
-        RippleWaveform w = PwmRipple.waveform(ConductionPattern.rippleSwing(modulation) * bus, r, motor.inductance(),
-                onFraction, ConductionPattern.ripplePeriodFactor(modulation) / frequency);
-        memoResistance[memoNext] = r;
-        memoOnFraction[memoNext] = onFraction;
-        memoWaveform[memoNext] = w;
-        memoNext = (memoNext + 1) % memoWaveform.length;
-        return w;
+
+        RippleWaveform get(double r, double delta) {
+            for (int j = 0; j < waveform.length; j++) {
+                if (waveform[j] != null && resistance[j] == r && onFraction[j] == delta) {
+                    return waveform[j];
+                }
+            }
+            RippleWaveform w = PwmRipple.waveform(swing, r, inductance, delta, period);
+            resistance[next] = r;
+            onFraction[next] = delta;
+            waveform[next] = w;
+            next = (next + 1) % waveform.length;
+            return w;
+        }
     }
 
     /** Ripple variance averaged over the piece's voltage ramp (Simpson's rule on start, middle and end). */
-    private double rippleVariance(Modulation modulation, double bus, double r, int k, double kt, Motor m) {
+    private double rippleVariance(RippleCache ripples, Modulation modulation, double bus, double r, int k, double kt,
+            Motor m) {
         double i = current[k];
         double v0 = DcMotor.terminalVoltage(i, r, kt, motorSpeedStart[k], m.brushDrop());
         double v1 = DcMotor.terminalVoltage(i, r, kt, motorSpeedEnd[k], m.brushDrop());
         double vm = (v0 + v1) / 2;
-        double a = waveform(modulation, bus, r, ConductionPattern.rippleOnFraction(modulation, v0 / bus)).variance();
-        double b = waveform(modulation, bus, r, ConductionPattern.rippleOnFraction(modulation, vm / bus)).variance();
-        double c = waveform(modulation, bus, r, ConductionPattern.rippleOnFraction(modulation, v1 / bus)).variance();
+        double a = ripples.get(r, ConductionPattern.rippleOnFraction(modulation, v0 / bus)).variance();
+        double b = ripples.get(r, ConductionPattern.rippleOnFraction(modulation, vm / bus)).variance();
+        double c = ripples.get(r, ConductionPattern.rippleOnFraction(modulation, v1 / bus)).variance();
         return (a + 4 * b + c) / 6;
     }
 

@@ -144,6 +144,8 @@ public final class WindingThermalNetwork {
         final double u1, u2;
         final double f11, f12, f21, f22;
         final double g1, g2;
+        // e^(λt), h1(λt) and h2(λt) of both eigenvalues over the whole piece, reused for its mean and end.
+        final double e1, e2, k1, k2, j1, j2;
 
         Piece(double duration, double windingLoss, double slope, double housingLoss) {
             t = duration;
@@ -167,14 +169,18 @@ public final class WindingThermalNetwork {
             m12 = a12 / s;
             m21 = a21 / s;
             m22 = (a22 - l2) / s;
-            double e1 = Math.exp(l1 * t);
-            double e2 = Math.exp(l2 * t);
+            e1 = Math.exp(l1 * t);
+            e2 = Math.exp(l2 * t);
             f11 = e1 * m11 + e2 * (1 - m11);
             f12 = e1 * m12 - e2 * m12;
             f21 = e1 * m21 - e2 * m21;
             f22 = e1 * m22 + e2 * (1 - m22);
-            double p1 = t * h1(l1 * t);
-            double p2 = t * h1(l2 * t);
+            k1 = h1(l1 * t);
+            k2 = h1(l2 * t);
+            j1 = h2(l1 * t);
+            j2 = h2(l2 * t);
+            double p1 = t * k1;
+            double p2 = t * k2;
             g1 = (p1 * m11 + p2 * (1 - m11)) * u1 + (p1 - p2) * m12 * u2;
             g2 = (p1 - p2) * m21 * u1 + (p1 * m22 + p2 * (1 - m22)) * u2;
         }
@@ -193,16 +199,16 @@ public final class WindingThermalNetwork {
             double pb = xw - pa;
             double qa = m11 * u1 + m12 * u2;
             double qb = u1 - qa;
-            return h1(l1 * t) * pa + h1(l2 * t) * pb + t * (h2(l1 * t) * qa + h2(l2 * t) * qb);
+            return k1 * pa + k2 * pb + t * (j1 * qa + j2 * qb);
         }
 
         double peakWinding(double xw, double xh) {
-            double end = windingAt(t, xw, xh);
-            double best = Math.max(xw, end);
             double pa = m11 * xw + m12 * xh;
             double pb = xw - pa;
             double qa = m11 * u1 + m12 * u2;
             double qb = u1 - qa;
+            double end = e1 * pa + e2 * pb + t * k1 * qa + t * k2 * qb;
+            double best = Math.max(xw, end);
             double ga = l1 * pa + qa;
             double gb = l2 * pb + qb;
             if (ga != 0) {

@@ -58,6 +58,7 @@ public final class Workbench {
         return t;
     });
     private Future<ShortlistGridModel> pendingView;
+    private Future<String> pendingExport;
     private int pendingKeepRow;
     private long lastProgressDraw;
     private BackgroundRanking ranking;
@@ -224,7 +225,7 @@ public final class Workbench {
      * @return true when something on screen changed
      */
     public boolean tick() {
-        boolean viewChanged = takeFinishedView();
+        boolean viewChanged = takeFinishedView() | takeFinishedExport();
         if (ranking == null) {
             return viewChanged;
         }
@@ -300,6 +301,29 @@ public final class Workbench {
         grid.setModel(gridModel);
         grid.setCursorRow(Math.max(0, cursor));
         statusBar.invalidate();
+    }
+
+    /** Reports an export written on the worker thread, once it is done. */
+    private boolean takeFinishedExport() {
+        Future<String> f = pendingExport;
+        if (f == null || !f.isDone()) {
+            return false;
+        }
+        pendingExport = null;
+        try {
+            showMessage(f.get());
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+        } catch (CancellationException | ExecutionException e) {
+            Throwable cause = e.getCause() == null ? e : e.getCause();
+            showMessage("could not write the CSV: " + cause.getMessage());
+        }
+        return true;
+    }
+
+    /** True while an export is being written. */
+    public boolean isExporting() {
+        return pendingExport != null;
     }
 
     /** Swaps in a view sorted on the worker thread, once it is ready. */
@@ -443,12 +467,18 @@ public final class Workbench {
                 confirmed[0] = file;
                 return file.getFileName() + " exists: Enter again replaces it, Esc keeps it";
             }
-            try {
-                backend.writeCsv(file, shortlist, gridModel.order(), view);
-            } catch (Exception e) {
-                return "could not write " + file.getFileName() + ": " + e.getMessage();
+            if (pendingExport != null) {
+                return "still writing the previous export";
             }
-            showMessage("wrote " + gridModel.rowCount() + " rows to " + file);
+            // Written on the worker thread: a million rows take seconds, the screen keeps answering.
+            Shortlist s = shortlist;
+            int[] order = gridModel.order();
+            ViewSettings v = view;
+            pendingExport = viewWorker.submit(() -> {
+                backend.writeCsv(file, s, order, v);
+                return "wrote " + order.length + " rows to " + file;
+            });
+            showMessage("writing " + order.length + " rows to " + file + "...");
             return null;
         });
     }

@@ -107,6 +107,17 @@ class MarginsAndAdvisoriesTest {
         assertEquals((48.0 - 26.0) / 48.0, quiet().margins().get(Constraint.VDS_RATING), 1e-12);
     }
 
+    /**
+     * Winding margin: the insulation class limit (IEC 60085 class F, 155 °C, the test motor's) less the bench's
+     * 10 K, against the hottest winding temperature: (145 − T)/145. Exact arithmetic.
+     */
+    @Test
+    void windingMarginIsInsulationClassLessBenchMargin() {
+        PairingResult r = quiet();
+        double limit = dev.yoke.physics.InsulationClass.F.limitTemp() - 10;
+        assertEquals((limit - r.totals().windingTempMax()) / limit, r.margins().get(Constraint.WINDING_TEMP), 1e-12);
+    }
+
     /** Dead time vs turn-off time: a longer dead time always raises the margin (shoot-through safety). */
     @Test
     void longerDeadTimeRaisesDeadTimeMargin() {

@@ -297,6 +297,10 @@ class WorkbenchTest {
             h.press(key('x'));
             assertTrue(h.line(h.rows() - 2).contains("shortlist.csv"), h.line(h.rows() - 2));
             h.press(KeyType.Enter);
+            for (int i = 0; i < 2000 && h.workbench.isExporting(); i++) {
+                Thread.sleep(5);
+                h.press(KeyType.ArrowLeft);
+            }
             Path csv = dir.resolve("shortlist.csv");
             List<String> lines = Files.readAllLines(csv);
             ShortlistGridModel m = h.workbench.gridModel();
