@@ -63,19 +63,23 @@ public final class CatalogLoader {
         Map<String, Origin> switchOrigins = new LinkedHashMap<>();
         List<CatalogFile> files = new ArrayList<>();
         Set<String> implausible = new LinkedHashSet<>();
-        for (Path path : paths) {
-            SourceFile source = SourceFile.read(path, problems);
-            if (source == null) {
+        // Files are read and checked in parallel (each on its own problem list), then merged in
+        // name order, so the result and the order of problems do not depend on the threads.
+        List<FileResult> results = paths.size() > 1
+                ? paths.parallelStream().map(CatalogLoader::readFile).toList()
+                : paths.stream().map(CatalogLoader::readFile).toList();
+        for (int i = 0; i < paths.size(); i++) {
+            Path path = paths.get(i);
+            FileResult result = results.get(i);
+            problems.addAll(result.problems());
+            if (result.identity() == null) {
                 continue;
             }
-            files.add(source.identity());
-            YamlNode root = YamlReader.read(path, source.bytes(), problems);
-            if (root == null) {
+            files.add(result.identity());
+            CatalogReader reader = result.reader();
+            if (reader == null) {
                 continue;
             }
-            SectionReader sections = new SectionReader(path, problems);
-            CatalogReader reader = new CatalogReader(sections);
-            reader.read(root);
             for (CatalogReader.Located<Motor> m : reader.motors) {
                 if (unique(path, m, m.part().id(), "motor", motorOrigins, problems)) {
                     motors.add(m.part());
@@ -100,6 +104,25 @@ public final class CatalogLoader {
         }
         return new LoadedCatalog(new Catalog(motors, switches), motorOrigins, switchOrigins, files, problems,
                 implausible);
+    }
+
+    /** One file read and checked on its own: its stamp (null when unreadable), its parts (null when not YAML), its problems. */
+    private record FileResult(CatalogFile identity, CatalogReader reader, List<Problem> problems) {
+    }
+
+    private static FileResult readFile(Path path) {
+        List<Problem> problems = new ArrayList<>();
+        SourceFile source = SourceFile.read(path, problems);
+        if (source == null) {
+            return new FileResult(null, null, problems);
+        }
+        YamlNode root = YamlReader.read(path, source.bytes(), problems);
+        if (root == null) {
+            return new FileResult(source.identity(), null, problems);
+        }
+        CatalogReader reader = new CatalogReader(new SectionReader(path, problems));
+        reader.read(root);
+        return new FileResult(source.identity(), reader, problems);
     }
 
     private static boolean unique(Path path, CatalogReader.Located<?> part, String id, String noun,

@@ -31,6 +31,9 @@ public final class PartFields {
 
     private static final Map<PartKind, List<FieldSpec>> TABLE = new EnumMap<>(PartKind.class);
 
+    /** The same tables indexed by key: every key of every loaded part is looked up here. */
+    private static final Map<PartKind, Map<String, FieldSpec>> BY_KEY = new EnumMap<>(PartKind.class);
+
     static {
         Table catalog = new Table(PartKind.CATALOG);
         catalog.optional("motors", SECTION_LIST, null, null, "", Range.ANY, "the motors of this file");
@@ -156,6 +159,11 @@ public final class PartFields {
                 "load speed at the end, linear ramp between (signed)");
         segment.required("torque", QUANTITY, Dimension.TORQUE, Range.ANY,
                 "load torque, load side (positive needs driving, negative drives back)");
+        for (Map.Entry<PartKind, List<FieldSpec>> table : TABLE.entrySet()) {
+            Map<String, FieldSpec> byKey = new java.util.HashMap<>();
+            table.getValue().forEach(f -> byKey.put(f.key(), f));
+            BY_KEY.put(table.getKey(), byKey);
+        }
     }
 
     private PartFields() {
@@ -168,7 +176,7 @@ public final class PartFields {
 
     /** The spec of {@code key} in {@code kind}, if there is one. */
     public static Optional<FieldSpec> find(PartKind kind, String key) {
-        return of(kind).stream().filter(f -> f.key().equals(key)).findFirst();
+        return Optional.ofNullable(BY_KEY.get(kind).get(key));
     }
 
     /** The spec of {@code key} in {@code kind}; for keys the code itself names. */

@@ -3,6 +3,7 @@ package dev.yoke.cli;
 import com.fasterxml.jackson.core.JsonGenerator;
 import dev.yoke.catalog.AtomicFile;
 import dev.yoke.catalog.InputException;
+import dev.yoke.engine.Column;
 import dev.yoke.engine.DriveEvaluator;
 import dev.yoke.engine.PairingEvaluator;
 import dev.yoke.engine.Ranking;
@@ -17,6 +18,9 @@ import dev.yoke.report.Meta;
 import dev.yoke.report.PairingJson;
 import dev.yoke.report.ShortlistCsvWriter;
 import dev.yoke.report.ShortlistTable;
+import dev.yoke.units.Dimension;
+import dev.yoke.units.UnitException;
+import dev.yoke.units.Units;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.OutputStreamWriter;
@@ -74,6 +78,11 @@ public final class RankCommand implements Callable<Integer> {
             description = "Only pairings whose motor or switch id or label contains every word of TEXT.")
     String match;
 
+    @Option(names = "--at-least", paramLabel = "KEY=X",
+            description = "Only pairings whose metric KEY is at least X, e.g. margin_junction=0.1 or margin_headroom=10%%;"
+                    + " repeatable.")
+    Map<String, String> atLeast = new LinkedHashMap<>();
+
     @Option(names = "--top", paramLabel = "N",
             description = "Keep only the first N pairings (bounded memory for large catalogs); prints N rows.")
     Integer top;
@@ -116,6 +125,17 @@ public final class RankCommand implements Callable<Integer> {
         }
         RowFilter filter = RowFilter.ALL.withFeasibleOnly(feasibleOnly).withParetoOnly(paretoOnly)
                 .withMaxCost(maxCost == null ? Double.POSITIVE_INFINITY : maxCost).withText(match == null ? "" : match);
+        for (Map.Entry<String, String> e : atLeast.entrySet()) {
+            try {
+                Column column = Column.parse(e.getKey());
+                if (column.kind() != Column.Kind.METRIC) {
+                    return usage(err, "--at-least: '" + e.getKey() + "' is not a metric");
+                }
+                filter = filter.withAtLeast(column.metric(), Units.parse(e.getValue(), Dimension.DIMENSIONLESS));
+            } catch (IllegalArgumentException | UnitException ex) {
+                return usage(err, "--at-least " + e.getKey() + "=" + e.getValue() + ": " + ex.getMessage());
+            }
+        }
 
         Inputs inputs;
         try {

@@ -22,7 +22,9 @@ import java.util.Locale;
  * </pre>
  * {@code write} splits the parts into files of {@value #PARTS_PER_FILE} (as a user would keep
  * them, and well under the loader's 8 MB file cap). {@code load} times the first load of a fresh
- * JVM (what {@code yoke} does on every start) and then repeated loads.
+ * JVM (what {@code yoke} does on every start) and then repeated loads, with the CPU time of the
+ * whole JVM (loader threads, compiler, collector) beside the wall time: on a busy machine the wall
+ * time mostly measures the wait.
  */
 public final class CatalogScaleBench {
 
@@ -46,15 +48,24 @@ public final class CatalogScaleBench {
                 int repeats = args.length > 2 ? Integer.parseInt(args[2]) : 5;
                 for (int i = 0; i <= repeats; i++) {
                     long start = System.nanoTime();
+                    long cpuStart = processCpuNanos();
                     LoadedCatalog loaded = CatalogLoader.load(folder);
                     double ms = (System.nanoTime() - start) / 1e6;
-                    System.out.printf(Locale.ROOT, "%s load: %d motors, %d switches from %d files in %.0f ms%n",
+                    double cpuMs = (processCpuNanos() - cpuStart) / 1e6;
+                    System.out.printf(Locale.ROOT, "%s load: %d motors, %d switches from %d files in %.0f ms"
+                            + " (%.0f ms of CPU, all threads of the JVM; load average %.1f)%n",
                             i == 0 ? "first" : "again", loaded.catalog().motors().size(),
-                            loaded.catalog().switches().size(), loaded.files().size(), ms);
+                            loaded.catalog().switches().size(), loaded.files().size(), ms, cpuMs,
+                            java.lang.management.ManagementFactory.getOperatingSystemMXBean().getSystemLoadAverage());
                 }
             }
             default -> throw new IllegalArgumentException("write DIR [motors switches] | load DIR [repeats]");
         }
+    }
+
+    private static long processCpuNanos() {
+        return ((com.sun.management.OperatingSystemMXBean)
+                java.lang.management.ManagementFactory.getOperatingSystemMXBean()).getProcessCpuTime();
     }
 
     /** Writes {@code catalog} into {@code folder} as numbered files; returns the bytes written. */

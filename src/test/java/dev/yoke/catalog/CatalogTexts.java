@@ -1,33 +1,45 @@
 package dev.yoke.catalog;
 
-import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.dataformat.yaml.YAMLFactory;
 import java.io.IOException;
+import java.io.InputStream;
+import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 
-/** Catalog texts for the saving tests, and a check that a saved file still loads. */
+/** Two valid versions of a catalog file for the saving tests, and a check that a folder still loads. */
 final class CatalogTexts {
 
     private CatalogTexts() {
     }
 
-    /** A catalog text with {@code motors} invented motors whose ids start with {@code prefix}. */
-    static String catalog(int motors, String prefix) {
-        StringBuilder text = new StringBuilder("# Invented parts for tests.\nmotors:\n");
-        for (int i = 0; i < motors; i++) {
-            text.append("  - id: ").append(prefix).append("-motor-").append(i).append('\n')
-                .append("    label: test motor ").append(i).append('\n')
-                .append("    resistance: ").append(1 + i % 7).append(".2 ohm\n");
+    /** The test catalog's motor file, as shipped in the test resources. */
+    static String motorsVersionA() throws IOException {
+        try (InputStream in = CatalogTexts.class.getResourceAsStream("/store/motors.yaml")) {
+            return new String(in.readAllBytes(), StandardCharsets.UTF_8);
         }
-        return text.toString();
     }
 
-    /** Fails when the file is not a whole YAML document. */
-    static void assertParses(Path file) throws IOException {
-        JsonNode root = new ObjectMapper(new YAMLFactory()).readTree(file.toFile());
-        if (root == null || !root.has("motors")) {
-            throw new AssertionError(file + " lost its motors");
+    /**
+     * Version A with {@code extra} more motors appended (copies of the first under new ids), so the
+     * two versions differ in length and a torn write could not pass for either.
+     */
+    static String motorsVersionB(int extra) throws IOException {
+        String a = motorsVersionA();
+        int start = a.indexOf("  - id: test-m-small");
+        int end = a.indexOf("  - id: test-m-fast");
+        String block = a.substring(start, end).stripTrailing() + "\n";
+        StringBuilder b = new StringBuilder(a);
+        for (int i = 0; i < extra; i++) {
+            b.append(block.replace("test-m-small", "test-m-extra-" + i));
+        }
+        return b.toString();
+    }
+
+    /** Fails unless the catalog loader accepts {@code folder} as it is on disk. */
+    static void assertLoads(Path folder) {
+        try {
+            CatalogLoader.load(folder);
+        } catch (InputException e) {
+            throw new AssertionError("the saved catalog no longer loads:\n" + e.getMessage(), e);
         }
     }
 }

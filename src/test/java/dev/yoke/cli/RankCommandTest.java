@@ -111,6 +111,21 @@ class RankCommandTest {
     }
 
     @Test
+    void marginThresholdKeepsOnlyPairingsAboveIt() throws Exception {
+        Run r = run("rank", DEMO, "--at-least", "margin_junction=50%", "--at-least", "margin_winding=0.1", "--json", "-");
+        assertTrue(r.status() <= 1, r.err());
+        JsonNode array = new ObjectMapper().readTree(r.out());
+        assertTrue(array.size() > 0);
+        for (JsonNode o : array) {
+            // float storage in the shortlist: compare with a float-sized tolerance
+            assertTrue(o.get("margins").get("junction").asDouble() >= 0.5 - 1e-6);
+            assertTrue(o.get("margins").get("winding").asDouble() >= 0.1 - 1e-6);
+        }
+        assertEquals(2, run("rank", DEMO, "--at-least", "motor=3").status(), "ids are not metrics");
+        assertEquals(2, run("rank", DEMO, "--at-least", "margin_junction=lots").status());
+    }
+
+    @Test
     void topNWithSegmentsGivesNObjectsWithSegments() throws Exception {
         Run r = run("rank", DEMO, "--top", "3", "--json", "-", "--segments");
         assertEquals(0, r.status(), r.err());

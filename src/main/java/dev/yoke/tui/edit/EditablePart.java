@@ -26,6 +26,9 @@ public interface EditablePart<T> {
     /** Checks across fields (a peak rating not below the continuous one…). */
     List<FormRule> rules();
 
+    /** The catalog's plausibility checks: doubts shown beside fields that never block a save. */
+    List<FormRule> doubts();
+
     /** The record as field values, keyed like {@link #fields()}. */
     Map<String, Object> values(T part);
 

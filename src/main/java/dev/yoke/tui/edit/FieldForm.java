@@ -10,6 +10,7 @@ import com.googlecode.lanterna.gui2.InteractableRenderer;
 import com.googlecode.lanterna.gui2.TextGUIGraphics;
 import com.googlecode.lanterna.input.KeyStroke;
 import com.googlecode.lanterna.input.KeyType;
+import dev.yoke.tui.LineEditor;
 
 import java.util.ArrayList;
 import java.util.Collections;
@@ -24,8 +25,9 @@ import java.util.function.Consumer;
  * {@code > ! key        [text           ] unit  message}.
  *
  * <p>Every key press re-reads the edited field and re-runs the cross-field rules, so the message
- * beside a field is always current; {@code !} marks an invalid field (meaning never rests on
- * colour). The form hands out values only when every field is valid.
+ * beside a field is always current; {@code !} marks an invalid field and {@code ?} a doubtful but
+ * possible one (meaning never rests on colour). The form hands out values only when every field
+ * is valid; doubts never block.
  *
  * <p>Keys: Up/Down move between fields, Enter moves on, PgUp/PgDn page, Tab/Shift+Tab leave the form;
  * typing, Backspace, Delete, Left, Right, Home and End edit; on a field with fixed options
@@ -42,6 +44,8 @@ public final class FieldForm extends AbstractInteractableComponent<FieldForm> {
     private final List<LineEditor> editors = new ArrayList<>();
     private final Map<String, String> problems = new LinkedHashMap<>();
     private final Map<String, Object> validValues = new LinkedHashMap<>();
+    private final Map<String, String> notes = new LinkedHashMap<>();
+    private List<FormRule> noteRules = List.of();
     private final int labelWidth;
     private final int unitWidth;
     private int visibleRows;
@@ -75,6 +79,22 @@ public final class FieldForm extends AbstractInteractableComponent<FieldForm> {
         revalidate();
     }
 
+    /**
+     * Checks whose findings are doubts, not errors (a value possible but unusual): shown beside the
+     * field with {@code ?} while the form is otherwise valid; they never block.
+     */
+    public synchronized FieldForm setNoteRules(List<FormRule> rules) {
+        this.noteRules = List.copyOf(rules);
+        revalidate();
+        invalidate();
+        return this;
+    }
+
+    /** Field key to doubt, while the form is valid; see {@link #setNoteRules}. */
+    public synchronized Map<String, String> notes() {
+        return Collections.unmodifiableMap(new LinkedHashMap<>(notes));
+    }
+
     /** Called after every edit, valid or not. */
     public FieldForm onEdit(Consumer<FieldForm> listener) {
         this.editListener = listener;
@@ -94,7 +114,7 @@ public final class FieldForm extends AbstractInteractableComponent<FieldForm> {
 
     /** Sets a field's raw text without firing listeners. */
     public synchronized FieldForm setText(String key, String text) {
-        editors.get(indexOf(key)).set(text);
+        editors.set(indexOf(key), new LineEditor(text));
         revalidate();
         invalidate();
         return this;
@@ -158,6 +178,9 @@ public final class FieldForm extends AbstractInteractableComponent<FieldForm> {
         if (problem != null) {
             return f.key() + ": " + problem;
         }
+        if (notes.containsKey(f.key())) {
+            return f.key() + ": check: " + notes.get(f.key());
+        }
         if (f.isChoice()) {
             return f.key() + ": one of " + String.join(", ", f.choices()) + " (Space cycles)";
         }
@@ -201,6 +224,22 @@ public final class FieldForm extends AbstractInteractableComponent<FieldForm> {
             problems.clear();
             problems.putAll(ordered);
         }
+        notes.clear();
+        if (problems.isEmpty()) {
+            for (FormRule rule : noteRules) {
+                rule.check(validValues).forEach(notes::putIfAbsent);
+            }
+        }
+    }
+
+    /** The message shown beside field {@code key}: its problem ({@code !}), else its doubt ({@code ?}). */
+    private String remark(String key) {
+        String p = problems.get(key);
+        if (p != null) {
+            return "! " + p;
+        }
+        String n = notes.get(key);
+        return n == null ? null : "? " + n;
     }
 
     private void moveTo(int row) {
@@ -224,8 +263,8 @@ public final class FieldForm extends AbstractInteractableComponent<FieldForm> {
         int messageColumn = messageColumn();
         for (int i = 0; i < fields.size(); i++) {
             lines.add(new int[] {i, 0});
-            String p = problems.get(fields.get(i).key());
-            if (p != null && TerminalTextUtils.getColumnWidth("! " + p) > width - messageColumn) {
+            String r = remark(fields.get(i).key());
+            if (r != null && TerminalTextUtils.getColumnWidth(r) > width - messageColumn) {
                 lines.add(new int[] {i, 1});
             }
         }
@@ -319,12 +358,12 @@ public final class FieldForm extends AbstractInteractableComponent<FieldForm> {
             }
             List<String> words = field.choices();
             int at = Math.max(0, words.indexOf(editor.text()));
-            editor.set(words.get(Math.floorMod(at + step, words.size())));
+            editors.set(selected, new LineEditor(words.get(Math.floorMod(at + step, words.size()))));
             edited();
             return Result.HANDLED;
         }
         String before = editor.text();
-        if (!editor.handle(key)) {
+        if (!editor.edit(key)) {
             return Result.UNHANDLED;
         }
         if (!before.equals(editor.text())) {
@@ -332,6 +371,11 @@ public final class FieldForm extends AbstractInteractableComponent<FieldForm> {
         }
         invalidate();
         return Result.HANDLED;
+    }
+
+    /** Index of the first character shown in {@code width} columns so that the caret stays visible. */
+    static int firstShown(LineEditor e, int width) {
+        return width <= 0 || e.caret() < width ? 0 : e.caret() - width + 1;
     }
 
     private void edited() {
@@ -365,7 +409,7 @@ public final class FieldForm extends AbstractInteractableComponent<FieldForm> {
                 }
                 LineEditor e = form.editors.get(form.selected);
                 int caretColumn = TerminalTextUtils.getColumnWidth(
-                        e.text().substring(e.scrollFor(form.valueWidth), e.caret()));
+                        e.text().substring(firstShown(e, form.valueWidth), e.caret()));
                 return new TerminalPosition(4 + form.labelWidth + 2 + caretColumn, form.selectedLine);
             }
         }
@@ -393,10 +437,10 @@ public final class FieldForm extends AbstractInteractableComponent<FieldForm> {
                     if (entry[1] == 0) {
                         drawLine(g, form, entry[0], line, width, n + 1 < lines.size() && lines.get(n + 1)[1] == 1);
                     } else {
-                        String p = form.problems.get(form.fields.get(entry[0]).key());
+                        String r = form.remark(form.fields.get(entry[0]).key());
                         int x = 4 + form.labelWidth + 1;
-                        g.putString(2, line, "!");
-                        g.putString(x, line, TerminalTextUtils.fitString(AsciiText.of("! " + p, form.unicode),
+                        g.putString(2, line, r.substring(0, 1));
+                        g.putString(x, line, TerminalTextUtils.fitString(AsciiText.of(r, form.unicode),
                                 Math.max(0, width - x)));
                     }
                 }
@@ -413,13 +457,13 @@ public final class FieldForm extends AbstractInteractableComponent<FieldForm> {
                                      boolean messageBelow) {
             FormField f = form.fields.get(i);
             boolean current = i == form.selected;
-            String problem = form.problems.get(f.key());
+            String remark = form.remark(f.key());
             g.applyThemeStyle(form.getThemeDefinition().getNormal());
             if (current && form.isFocused()) {
                 g.putString(1, line, ">");
             }
-            if (problem != null) {
-                g.putString(2, line, "!");
+            if (remark != null) {
+                g.putString(2, line, remark.substring(0, 1));
             }
             g.putString(4, line, TerminalTextUtils.fitString(f.key(), form.labelWidth));
             int x = 4 + form.labelWidth + 1;
@@ -428,7 +472,7 @@ public final class FieldForm extends AbstractInteractableComponent<FieldForm> {
             if (f.isChoice()) {
                 shown = "< " + e.text() + " >";
             } else {
-                int from = current && form.isFocused() ? e.scrollFor(form.valueWidth) : 0;
+                int from = current && form.isFocused() ? firstShown(e, form.valueWidth) : 0;
                 shown = e.text().substring(Math.min(from, e.text().length()));
             }
             shown = TerminalTextUtils.fitString(shown, form.valueWidth);
@@ -445,8 +489,8 @@ public final class FieldForm extends AbstractInteractableComponent<FieldForm> {
             int ux = x + form.valueWidth + 3;
             g.putString(ux, line, AsciiText.of(f.unit(), form.unicode));
             int mx = ux + form.unitWidth + 2;
-            if (problem != null && !messageBelow && mx < width) {
-                g.putString(mx, line, TerminalTextUtils.fitString(AsciiText.of("! " + problem, form.unicode), width - mx));
+            if (remark != null && !messageBelow && mx < width) {
+                g.putString(mx, line, TerminalTextUtils.fitString(AsciiText.of(remark, form.unicode), width - mx));
             }
         }
     }

@@ -48,11 +48,6 @@ public record FormField(
         choices = List.copyOf(choices);
     }
 
-    /** Free text; required unless {@code optional}. The value is the trimmed string. */
-    public static FormField text(String key, boolean optional) {
-        return new FormField(key, "", String::trim, String::valueOf, List.of(), optional ? "" : null, "");
-    }
-
     /** One of fixed words; the value is {@code toValue} of the chosen word. */
     public static FormField choice(String key, List<String> words, Function<String, Object> toValue,
                                    Function<Object, String> toWord) {

@@ -3,6 +3,7 @@ package dev.yoke.tui.edit;
 import dev.yoke.catalog.PartFields;
 import dev.yoke.catalog.PartKind;
 import dev.yoke.catalog.PartRules;
+import dev.yoke.catalog.Plausibility;
 import dev.yoke.model.Catalog;
 import dev.yoke.model.Motor;
 import dev.yoke.units.Dimension;
@@ -53,6 +54,12 @@ public final class MotorEditing implements EditablePart<Motor> {
     @Override
     public List<FormRule> rules() {
         return RULES;
+    }
+
+    @Override
+    public List<FormRule> doubts() {
+        return List.of(FormRule.onRecord(FIELDS.stream().map(FormField::key).toList(), INSTANCE::build,
+                m -> MotorEditing.issues(Plausibility.motorWarnings(m))));
     }
 
     @Override

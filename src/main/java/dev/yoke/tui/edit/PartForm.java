@@ -60,7 +60,7 @@ final class PartForm extends BasicWindow {
         List<FormRule> rules = new ArrayList<>(kind.rules());
         rules.add(v -> takenIds.contains(v.get("id")) ? Map.of("id", "already used by another part") : Map.of());
         int rows = Math.max(4, gui.getScreen().getTerminalSize().getRows() - 4);
-        form = new FieldForm(fields, rules, rows);
+        form = new FieldForm(fields, rules, rows).setNoteRules(kind.doubts());
         if (replacedId == null) {
             form.setText(FILE, this.files.get(0).toString());
         }
@@ -115,7 +115,9 @@ final class PartForm extends BasicWindow {
         if (!message.isEmpty()) {
             show(state, message);
         } else if (form.problems().isEmpty()) {
-            show(state, "All fields valid: F2 saves.");
+            show(state, form.notes().isEmpty() ? "All fields valid: F2 saves."
+                    : "All fields valid: F2 saves. Doubtful (marked ?, check the datasheet): "
+                    + String.join(", ", form.notes().keySet()));
         } else {
             show(state, "Cannot save, " + form.problemSummary() + " (marked !)");
         }

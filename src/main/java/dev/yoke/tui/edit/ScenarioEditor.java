@@ -74,7 +74,8 @@ public final class ScenarioEditor extends BasicWindow {
         int spare = Math.max(8, screen.getRows() - 6);
         int tableRows = Math.max(3, Math.min(scenario.profile().segments().size() + 2, spare / 2));
         int formRows = Math.max(4, spare - tableRows);
-        form = new FieldForm(ScenarioFields.fields(), ScenarioFields.rules(), formRows);
+        form = new FieldForm(ScenarioFields.fields(), ScenarioFields.rules(), formRows)
+                .setNoteRules(ScenarioFields.doubts());
         ScenarioFields.fill(form, scenario);
         table = new SegmentTable(scenario.profile().segments(), tableRows);
         form.onEdit(f -> refresh()).onCommit(f -> passOn());

@@ -5,6 +5,7 @@ import dev.yoke.catalog.FieldType;
 import dev.yoke.catalog.PartFields;
 import dev.yoke.catalog.PartKind;
 import dev.yoke.catalog.PartRules;
+import dev.yoke.catalog.Plausibility;
 import dev.yoke.model.Bench;
 import dev.yoke.model.Limits;
 import dev.yoke.model.Modulation;
@@ -65,6 +66,13 @@ final class ScenarioFields {
         List<String> keys = fields().stream().map(FormField::key).toList();
         return List.of(FormRule.onRecord(keys, ScenarioFields::bench,
                 b -> MotorEditing.issues(PartRules.benchErrors(b))));
+    }
+
+    /** The loader's plausibility doubts about the bench: shown with {@code ?}, never blocking. */
+    static List<FormRule> doubts() {
+        List<String> keys = fields().stream().map(FormField::key).toList();
+        return List.of(FormRule.onRecord(keys, ScenarioFields::bench,
+                b -> MotorEditing.issues(Plausibility.benchWarnings(b))));
     }
 
     static void fill(FieldForm form, Scenario s) {

@@ -10,6 +10,7 @@ import com.googlecode.lanterna.gui2.TextGUIGraphics;
 import com.googlecode.lanterna.input.KeyStroke;
 import com.googlecode.lanterna.input.KeyType;
 import dev.yoke.catalog.PartKind;
+import dev.yoke.tui.LineEditor;
 import dev.yoke.model.Segment;
 
 import java.util.ArrayList;
@@ -279,7 +280,7 @@ public final class SegmentTable extends AbstractInteractableComponent<SegmentTab
                     break;
                 default:
                     String before = editor.text();
-                    if (editor.handle(key)) {
+                    if (editor.edit(key)) {
                         if (!before.equals(editor.text())) {
                             rows.get(row)[column] = editor.text();
                             editListener.accept(this);
@@ -389,7 +390,7 @@ public final class SegmentTable extends AbstractInteractableComponent<SegmentTab
                 }
                 int width = WIDTHS[t.column] - 2;
                 LineEditor e = t.editor;
-                int caret = TerminalTextUtils.getColumnWidth(e.text().substring(e.scrollFor(width), e.caret()));
+                int caret = TerminalTextUtils.getColumnWidth(e.text().substring(FieldForm.firstShown(e, width), e.caret()));
                 return new TerminalPosition(columnX(t.column) + 1 + caret, 1 + t.row - t.top);
             }
         }
@@ -439,7 +440,7 @@ public final class SegmentTable extends AbstractInteractableComponent<SegmentTab
                 String text = t.rows.get(r)[c];
                 int width = WIDTHS[c] - 2;
                 if (current && t.editor != null) {
-                    text = text.substring(Math.min(text.length(), t.editor.scrollFor(width)));
+                    text = text.substring(Math.min(text.length(), FieldForm.firstShown(t.editor, width)));
                 }
                 String cell = TerminalTextUtils.fitString(text, width);
                 cell = cell + " ".repeat(Math.max(0, width - TerminalTextUtils.getColumnWidth(cell)));

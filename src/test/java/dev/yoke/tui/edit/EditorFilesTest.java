@@ -203,4 +203,20 @@ class EditorFilesTest {
         Motor saved = motor(CatalogLoader.load(catalog).catalog(), "dc12-08w");
         assertEquals(0.020, saved.torqueConstant(), 0.0);
     }
+
+    @Test
+    void doubtfulValueIsMarkedButDoesNotBlockTheSave() throws Exception {
+        Path catalog = bundledCatalog();
+        try (TerminalDriver t = new TerminalDriver(100, 30)) {
+            PartsEditor.open(t.gui, CatalogPartStore.open(catalog), saves::incrementAndGet);
+            // 10 H over 5.47 Ω is an electrical time constant of 1.8 s: possible, but almost surely a unit slip
+            t.press(KeyType.Enter).press(KeyType.ArrowDown, 5).clearField(20).type("10 H");
+            String field = t.lineWithNext("inductance");
+            assertTrue(field.contains("? electrical time constant"), field);
+            assertFalse(field.contains("!"), "a doubt is not an error");
+            t.press(KeyType.F2);
+            assertTrue(t.text().contains("Saved motor dc12-03w"), t.text());
+        }
+        assertEquals(10.0, motor(CatalogLoader.load(catalog).catalog(), "dc12-03w").inductance(), 0.0);
+    }
 }
