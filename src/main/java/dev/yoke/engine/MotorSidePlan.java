@@ -25,6 +25,8 @@ final class MotorSidePlan implements PairingEvaluator.MotorSide {
     static final int THERMAL_PASSES = 4;
     /** Passes stop when no piece's mean winding temperature moves more than this, K (far below the model's accuracy). */
     static final double THERMAL_TOLERANCE = 1e-3;
+    /** Passes also stop when no piece's copper loss moves by more than this fraction (the temperatures would not move). */
+    static final double LOSS_TOLERANCE = 1e-7;
     /** Audible limit of PWM ripple, Hz (common practice: the upper limit of human hearing). */
     static final double AUDIBLE_LIMIT = 20e3;
     /** L/R shorter than this many output periods reads as a rough current (common practice: "a few"). */
@@ -187,11 +189,17 @@ final class MotorSidePlan implements PairingEvaluator.MotorSide {
         }
         WindingThermalResponse response = null;
         for (int pass = 0; pass < THERMAL_PASSES; pass++) {
+            boolean lossMoved = pass == 0;
             for (int k = 0; k < n; k++) {
                 double r = Copper.resistanceAt(motor.resistance(), motor.resistanceTemp(), windingMeanTemp[k]);
                 double ms = current[k] * current[k] + rippleVariance(ripples, modulation, bus, r, k, kt, motor);
+                double slope = ms * r20 * Copper.ALPHA_20;
+                lossMoved |= Math.abs(slope - lossSlope[k]) > LOSS_TOLERANCE * slope;
                 lossAtAmbient[k] = ms * r20 * (1 + Copper.ALPHA_20 * (ambient - Copper.REFERENCE_TEMP));
-                lossSlope[k] = ms * r20 * Copper.ALPHA_20;
+                lossSlope[k] = slope;
+            }
+            if (!lossMoved) {
+                break; // the same losses would give the same temperatures
             }
             response = network.respond(durations, lossAtAmbient, lossSlope, housingLoss, profile.repeat());
             double[] mean = response.meanRise();

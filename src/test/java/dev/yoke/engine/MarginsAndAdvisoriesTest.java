@@ -118,6 +118,31 @@ class MarginsAndAdvisoriesTest {
         assertEquals((limit - r.totals().windingTempMax()) / limit, r.margins().get(Constraint.WINDING_TEMP), 1e-12);
     }
 
+    /**
+     * Bus corners: losses and temperatures at the nominal bus, headroom at the lowest, V_DS at the highest.
+     * Moving the lowest bus changes only the headroom; moving the highest changes only the V_DS margin.
+     */
+    @Test
+    void eachBusCornerMovesOnlyItsOwnFigure() {
+        PairingResult base = quiet();
+        PairingResult lower = evaluate(bench(quietScenario(), b -> Records.with(b, "busVoltageMin", 18.0)),
+                TestParts.motor(), TestParts.powerSwitch());
+        PairingResult higher = evaluate(bench(quietScenario(), b -> Records.with(b, "busVoltageMax", 30.0)),
+                TestParts.motor(), TestParts.powerSwitch());
+        assertEquals(base.totals(), lower.totals());
+        assertEquals(base.totals(), higher.totals());
+        assertTrue(lower.margins().get(Constraint.VOLTAGE_HEADROOM) < base.margins().get(Constraint.VOLTAGE_HEADROOM));
+        assertTrue(higher.margins().get(Constraint.VDS_RATING) < base.margins().get(Constraint.VDS_RATING));
+        for (Constraint c : Constraint.values()) {
+            if (c != Constraint.VOLTAGE_HEADROOM) {
+                assertEquals(base.margins().get(c), lower.margins().get(c), c.key());
+            }
+            if (c != Constraint.VDS_RATING) {
+                assertEquals(base.margins().get(c), higher.margins().get(c), c.key());
+            }
+        }
+    }
+
     /** Dead time vs turn-off time: a longer dead time always raises the margin (shoot-through safety). */
     @Test
     void longerDeadTimeRaisesDeadTimeMargin() {
