@@ -127,8 +127,57 @@ public final class BenchCommand implements Callable<Integer> {
             out.printf(Locale.ROOT, "    per CPU-second of the whole process: median %,.0f (x %d cores = %,.0f if the cores are free)%n",
                     median(cpuRates), effectiveThreads(), median(cpuRates) * effectiveThreads());
         }
+        Catalog head = SyntheticParts.catalog(Math.min(motors, 50), switches, seed);
+        PairingEvaluator small = DriveEvaluator.of(scenario, head);
+        out.printf(Locale.ROOT, "    one thread, per CPU-second of that thread: the evaluator in a bare loop %,.0f;"
+                + " the sweep (top 20) %,.0f%n", bareEvaluatorRate(small), oneThreadSweepRate(small, options));
         out.printf(Locale.ROOT, "    %,d feasible; best: %s + %s%n", last.feasibleCount(),
                 last.size() > 0 ? last.motorId(0) : "-", last.size() > 0 ? last.switchId(0) : "-");
+    }
+
+    /**
+     * Pairings per CPU-second of the evaluator called in a plain loop on this thread: the ceiling
+     * the sweep can reach per core, so the sweep's own overhead is the gap to the figure above.
+     */
+    private double bareEvaluatorRate(PairingEvaluator evaluator) {
+        java.lang.management.ThreadMXBean threadsBean = ManagementFactory.getThreadMXBean();
+        double[] row = new double[dev.yoke.engine.Metric.COUNT];
+        double best = 0;
+        for (int rep = 0; rep < 3; rep++) {
+            long n = 0;
+            long c0 = threadsBean.getCurrentThreadCpuTime();
+            for (int m = 0; m < evaluator.catalog().motors().size(); m++) {
+                for (int f = 0; f < frequencies; f++) {
+                    for (int r = 0; r < ratios; r++) {
+                        PairingEvaluator.MotorSide side = evaluator.prepare(m, f, r);
+                        for (int s = 0; s < switches; s++) {
+                            evaluator.summarize(side, s, row);
+                            n++;
+                        }
+                    }
+                }
+            }
+            long cpu = threadsBean.getCurrentThreadCpuTime() - c0;
+            if (cpu > 0) {
+                best = Math.max(best, n / (cpu / 1e9));
+            }
+        }
+        return best;
+    }
+
+    /** Pairings per CPU-second of a one-thread sweep (the calling thread does all the work). */
+    private static double oneThreadSweepRate(PairingEvaluator evaluator, SweepOptions options) {
+        java.lang.management.ThreadMXBean threadsBean = ManagementFactory.getThreadMXBean();
+        double best = 0;
+        for (int rep = 0; rep < 3; rep++) {
+            long c0 = threadsBean.getCurrentThreadCpuTime();
+            Shortlist s = Sweep.run(evaluator, options.withThreads(1));
+            long cpu = threadsBean.getCurrentThreadCpuTime() - c0;
+            if (cpu > 0) {
+                best = Math.max(best, s.evaluatedCount() / (cpu / 1e9));
+            }
+        }
+        return best;
     }
 
     /** (b) 100,000 pairings kept in full; the ambient temperature changes; re-evaluate and re-sort. */
