@@ -11,12 +11,15 @@ import com.googlecode.lanterna.gui2.WindowBasedTextGUI;
 import com.googlecode.lanterna.input.KeyStroke;
 import com.googlecode.lanterna.input.KeyType;
 import dev.yoke.catalog.ChangedOnDiskException;
+import dev.yoke.catalog.InputException;
+import dev.yoke.catalog.ScenarioLoader;
 import dev.yoke.model.Scenario;
 import dev.yoke.model.Segment;
 import dev.yoke.units.Dimension;
 import dev.yoke.units.Units;
 
 import java.io.IOException;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -66,7 +69,7 @@ public final class ScenarioEditor extends BasicWindow {
         this.onChange = Objects.requireNonNull(onChange, "onChange");
         this.saver = Objects.requireNonNull(saver, "saver");
         this.passedOn = scenario;
-        this.saved = scenario;
+        this.saved = onDisk(file);
         setHints(List.of(Window.Hint.FULL_SCREEN, Window.Hint.NO_DECORATIONS));
         TerminalSize screen = gui.getScreen().getTerminalSize();
         // title, heading, table header, status, state and keys take a line each; the rest is shared,
@@ -144,6 +147,18 @@ public final class ScenarioEditor extends BasicWindow {
             }
         });
         refresh();
+    }
+
+    /** The scenario the file holds now, or null when there is none that loads. */
+    private static Scenario onDisk(Path file) {
+        if (file == null || !Files.isRegularFile(file)) {
+            return null;
+        }
+        try {
+            return ScenarioLoader.load(file).scenario();
+        } catch (InputException e) {
+            return null;
+        }
     }
 
     /** Writes the file when everything is valid; otherwise says why not. */

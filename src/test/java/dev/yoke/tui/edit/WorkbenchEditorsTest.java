@@ -78,6 +78,9 @@ class WorkbenchEditorsTest {
             assertEquals(12.5, backend.scenarios.get(1).bench().busVoltage(), 0.0);
             assertEquals(12.5, workbench.scenario().bench().busVoltage(), 0.0);
             t.press(KeyType.Escape).press(KeyType.ArrowRight).press(KeyType.Enter); // close without saving
+            t.type("b");
+            assertTrue(t.text().contains("unsaved (F2 saves)"), "reopened: the screen is ahead of the file");
+            t.press(KeyType.Escape).press(KeyType.ArrowRight).press(KeyType.Enter);
 
             t.type("e");
             assertTrue(t.text().contains("[MOTORS 14]"), t.text());
