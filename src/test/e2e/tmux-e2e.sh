@@ -17,7 +17,20 @@ tm() { tmux -L "$sock" -f /dev/null "$@"; }
 cleanup() { tm kill-server >/dev/null 2>&1 || true; }
 trap cleanup EXIT INT TERM
 
-capture() { tm capture-pane -p -t e2e > "$out/$1.txt"; }
+# capture NAME: waits until the screen stops changing (two polls 0.3 s apart agree, at most ~10 s),
+# so a capture never catches the terminal half-way through a redraw on a busy machine.
+capture() {
+    prev=""
+    for _ in $(seq 1 33); do
+        now=$(tm capture-pane -p -t e2e)
+        if [ -n "$prev" ] && [ "$now" = "$prev" ]; then
+            break
+        fi
+        prev=$now
+        sleep 0.3
+    done
+    printf '%s\n' "$now" > "$out/$1.txt"
+}
 
 # wait_for TEXT SECONDS: polls the screen until TEXT shows.
 wait_for() {

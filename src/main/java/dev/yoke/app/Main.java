@@ -18,7 +18,7 @@ public final class Main {
 
     /** Runs Yoke with the given arguments and returns the exit status (testable without a process). */
     public static int run(PrintWriter out, PrintWriter err, String... args) {
-        CommandLine cli = YokeCommand.commandLine(out, err);
+        CommandLine cli = YokeCommand.commandLine(out, err, args);
         int status = cli.execute(args);
         out.flush();
         err.flush();

@@ -15,6 +15,7 @@ import java.nio.file.StandardOpenOption;
 import java.nio.file.attribute.FileTime;
 import java.nio.file.attribute.PosixFileAttributeView;
 import java.nio.file.attribute.PosixFilePermission;
+import java.nio.file.attribute.PosixFilePermissions;
 import java.security.SecureRandom;
 import java.time.Duration;
 import java.time.Instant;
@@ -179,13 +180,22 @@ public final class AtomicFile {
         return current;
     }
 
+    /**
+     * Gives the temporary the permissions of the file it replaces, or, for a new file, read-write for
+     * the owner and read for everyone else (what a new file gets under the usual umask 022; a
+     * temporary file alone would be owner-only, and an exported shortlist unreadable to colleagues).
+     */
     private static void copyPermissions(Path from, Path to) throws IOException {
+        PosixFileAttributeView target = Files.getFileAttributeView(to, PosixFileAttributeView.class);
+        if (target == null) {
+            return;
+        }
         if (!Files.exists(from, LinkOption.NOFOLLOW_LINKS)) {
+            target.setPermissions(PosixFilePermissions.fromString("rw-r--r--"));
             return;
         }
         PosixFileAttributeView source = Files.getFileAttributeView(from, PosixFileAttributeView.class);
-        PosixFileAttributeView target = Files.getFileAttributeView(to, PosixFileAttributeView.class);
-        if (source != null && target != null) {
+        if (source != null) {
             Set<PosixFilePermission> permissions = source.readAttributes().permissions();
             target.setPermissions(permissions);
         }

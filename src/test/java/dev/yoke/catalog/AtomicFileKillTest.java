@@ -100,7 +100,7 @@ class AtomicFileKillTest {
 
         Process start() throws IOException {
             String java = Path.of(System.getProperty("java.home"), "bin", "java").toString();
-            ProcessBuilder builder = new ProcessBuilder(java, "-Xshare:auto", "-XX:TieredStopAtLevel=1",
+            ProcessBuilder builder = new ProcessBuilder(java, "-Xshare:auto", "-XX:TieredStopAtLevel=1", "-XX:-UsePerfData",
                     "-XX:+UseSerialGC", "-Dyoke.plainWrite=" + Boolean.getBoolean("yoke.plainWrite"), "-cp", System.getProperty("java.class.path"),
                     AtomicWriteLoop.class.getName(), target.toString(), fileA.toString(), fileB.toString());
             builder.redirectErrorStream(true);

@@ -22,6 +22,14 @@ class AtomicFileTest {
     @TempDir
     Path folder;
 
+    /** A new file is readable by others like any file the user creates (common practice: umask 022), not owner-only. */
+    @Test
+    void newFileIsReadableByOthers() throws IOException {
+        Path target = folder.resolve("shortlist.csv");
+        AtomicFile.write(target, bytes("a,b"));
+        assertEquals("rw-r--r--", PosixFilePermissions.toString(Files.getPosixFilePermissions(target)));
+    }
+
     @Test
     void newFileGetsContentAndNoBackup() throws IOException {
         Path target = folder.resolve("motors.yaml");

@@ -20,7 +20,7 @@ public final class LockHolder {
     /** Starts a child JVM holding the lock of {@code folder}; returns once it holds it. */
     static Process start(Path folder) throws Exception {
         String java = Path.of(System.getProperty("java.home"), "bin", "java").toString();
-        Process child = new ProcessBuilder(java, "-XX:TieredStopAtLevel=1", "-cp",
+        Process child = new ProcessBuilder(java, "-XX:TieredStopAtLevel=1", "-XX:-UsePerfData", "-cp",
                 System.getProperty("java.class.path"), LockHolder.class.getName(), folder.toString())
                 .redirectErrorStream(true).start();
         String line = new java.io.BufferedReader(new java.io.InputStreamReader(child.getInputStream())).readLine();
