@@ -502,26 +502,46 @@ public final class Workbench {
     }
 
     private void openHelp() {
-        openPage("Help: keys", w -> helpLines(), KeyMap.View.PAGE);
+        openPage("Help: keys", this::helpLines, KeyMap.View.PAGE);
     }
 
     private void openCautions() {
         openPage("Cautions", Cautions::lines, KeyMap.View.PAGE);
     }
 
-    private List<Line> helpLines() {
+    /** Adds a help line, wrapping its text under the description column (column 14) when too wide. */
+    private static void addWrapped(List<Line> lines, String text, int width) {
+        int indent = 14;
+        if (text.length() <= width - 1 || width <= indent + 20) {
+            lines.add(Line.of(text));
+            return;
+        }
+        int split = Math.min(text.length(), indent);
+        String head = text.substring(0, split);
+        List<String> parts = Cautions.wrap(text.substring(split).strip(), width - 1 - indent);
+        for (int i = 0; i < parts.size(); i++) {
+            lines.add(Line.of((i == 0 ? String.format("%-" + indent + "s", head) : " ".repeat(indent)) + parts.get(i)));
+        }
+    }
+
+    /** The help page laid out for a width: long descriptions wrap under themselves, never cut. */
+    private List<Line> helpLines(int width) {
         Glyphs g = traits.glyphs();
         List<Line> lines = new ArrayList<>();
         for (String s : KeyMap.helpLines()) {
             boolean heading = !s.isEmpty() && !s.startsWith(" ");
-            lines.add(heading ? Line.of(Tone.HEADING, s) : Line.of(s));
+            if (heading) {
+                lines.add(Line.of(Tone.HEADING, s));
+            } else {
+                addWrapped(lines, s, width);
+            }
         }
         lines.add(Line.blank());
         lines.add(Line.of(Tone.HEADING, "Marks"));
-        lines.add(Line.of("  " + g.paretoMark() + "        on the Pareto front: no other pairing is at least as good on every objective"));
-        lines.add(Line.of("  " + g.suspectMark() + "id      a part the catalog check found implausible"));
-        lines.add(Line.of("  ok FAIL  verdict: FAIL when any margin is negative"));
-        lines.add(Line.of("  " + g.descending() + " " + g.ascending() + " " + g.descending() + "2      sort direction on a heading; 2 marks the second key"));
+        addWrapped(lines, "  " + g.paretoMark() + "        on the cost-loss front of feasible pairings: no other feasible pairing is both cheaper and less lossy", width);
+        addWrapped(lines, "  " + g.suspectMark() + "id      a part the catalog check found implausible", width);
+        addWrapped(lines, "  ok FAIL  verdict: FAIL when any margin is negative", width);
+        addWrapped(lines, "  " + g.descending() + " " + g.ascending() + " " + g.descending() + "2   sort direction on a heading; 2 marks the second key", width);
         lines.add(Line.of("  m:...    margin columns, (limit - value) / limit: negative fails"));
         lines.add(Line.blank());
         lines.add(Line.of(Tone.WARN, "Results are estimates for shortlisting; press c for the safety cautions."));

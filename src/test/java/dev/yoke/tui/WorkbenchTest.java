@@ -267,6 +267,23 @@ class WorkbenchTest {
         }
     }
 
+    /** At 80 columns every help description is whole: long ones wrap under themselves instead of being cut. */
+    @Test
+    void helpWrapsLongDescriptionsAt80Columns() throws Exception {
+        try (ScreenHarness h = new ScreenHarness(80, 24, TerminalTraits.PLAIN, dir).ranked()) {
+            h.press(key('?'));
+            StringBuilder seen = new StringBuilder();
+            for (int page = 0; page < 4; page++) {
+                seen.append(h.text()).append('\n');
+                h.press(KeyType.PageDown);
+            }
+            String words = seen.toString().replaceAll("\\s+", " ");
+            assertAll(
+                    () -> assertTrue(words.contains("reaches a minimum"), words),
+                    () -> assertTrue(words.contains("is both cheaper and less lossy"), words));
+        }
+    }
+
     @Test
     void helpAndCautionsAreOneKeyAway() throws Exception {
         try (ScreenHarness h = new ScreenHarness(100, 30, TerminalTraits.PLAIN, dir).ranked()) {
