@@ -186,8 +186,10 @@ public final class RankCommand implements Callable<Integer> {
             out.print(ShortlistTable.render(shortlist, view, top != null ? top : DEFAULT_SHOWN));
         }
         int shown = Math.min(view.length, top != null ? top : DEFAULT_SHOWN);
-        words.printf(Locale.ROOT, "%,d pairings, %,d feasible, %d on the cost-loss front; %d of %,d listed shown (%.2f s)%s%n",
-                shortlist.evaluatedCount(), shortlist.feasibleCount(), shortlist.paretoCount(),
+        // With --top only the kept rows are held, so the front is counted among them and says so.
+        String frontScope = shortlist.size() < shortlist.evaluatedCount() ? " among those kept" : "";
+        words.printf(Locale.ROOT, "%,d pairings, %,d feasible, %d on the cost-loss front%s; %d of %,d listed shown (%.2f s)%s%n",
+                shortlist.evaluatedCount(), shortlist.feasibleCount(), shortlist.paretoCount(), frontScope,
                 dataOnStdout ? 0 : shown, view.length, seconds,
                 csv != null && !csv.equals("-") ? "; CSV: " + csv : "");
         words.println(Cautions.LINE);
