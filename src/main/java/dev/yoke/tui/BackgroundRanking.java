@@ -48,6 +48,10 @@ public final class BackgroundRanking {
                 }
             } catch (InterruptedException | CancellationException e) {
                 state.set(State.CANCELLED);
+            } catch (OutOfMemoryError e) {
+                // The run's rows are unreachable once this thread ends, so the screen can go on.
+                failure.set("not enough memory for this many pairings: give Java more (-Xmx) or narrow the catalog");
+                state.set(State.FAILED);
             } catch (Exception | StackOverflowError e) {
                 if (cancelled.get()) {
                     state.set(State.CANCELLED);

@@ -576,8 +576,11 @@ public final class Workbench {
     private String statusText(int width) {
         String counts = shortlist == null
                 ? "ranking"
-                : String.format(Locale.ROOT, "%d shown / %d total / %d feasible", gridModel.rowCount(), shortlist.size(),
-                        shortlist.feasibleCount());
+                : shortlist.size() < shortlist.evaluatedCount()
+                        ? String.format(Locale.ROOT, "%d shown / best %d kept of %d / %d feasible", gridModel.rowCount(),
+                                shortlist.size(), shortlist.evaluatedCount(), shortlist.feasibleCount())
+                        : String.format(Locale.ROOT, "%d shown / %d total / %d feasible", gridModel.rowCount(),
+                                shortlist.size(), shortlist.feasibleCount());
         String filters = view.describeFilters();
         return " " + scenario.name() + " | " + counts + (filters.isEmpty() ? "" : " | only " + filters)
                 + " | sort " + view.describeSort();
