@@ -61,12 +61,18 @@ public final class SyntheticParts {
         double tauElectrical = 0.2e-3 + r.nextDouble() * 2.8e-3;
         double size = Math.cbrt(power / 100);                             // 0.58–1.7
         double mass = 0.25 * Math.pow(power / 20, 0.8);
+        double rthWinding = (1.0 + r.nextDouble() * 3) / size;
+        double rthHousing = (3.0 + r.nextDouble() * 6) / size;
+        // Heat capacity from the mass: 450–800 J/(kg·K) for a steel, copper and aluminium mix
+        // (common practice), a fifth to a third of it in the winding; τ = C·R_th.
+        double capacity = mass * (450 + r.nextDouble() * 350);
+        double windingShare = 0.2 + r.nextDouble() * 0.13;
         return new Motor(String.format("SM-%05d", index), "synthetic motor " + (int) power + " W " + (int) voltage + " V",
                 voltage, resistance, 20, tauElectrical * resistance, kt,
                 continuous * (0.03 + r.nextDouble() * 0.07), continuous, continuous * (3 + r.nextDouble() * 3),
                 noLoadSpeed * (1.2 + r.nextDouble() * 0.3), 2e-6 * Math.pow(power / 20, 1.3),
-                (1.0 + r.nextDouble() * 3) / size, (3.0 + r.nextDouble() * 6) / size,
-                15 + r.nextDouble() * 45, 300 + r.nextDouble() * 1500,
+                rthWinding, rthHousing,
+                capacity * windingShare * rthWinding, capacity * (1 - windingShare) * rthHousing,
                 INSULATION[r.nextInt(INSULATION.length)], r.nextInt(3) == 0 ? 0 : 0.3 + r.nextDouble() * 0.7,
                 mass, Math.round(10 + power * (0.2 + r.nextDouble() * 0.4)));
     }
@@ -80,13 +86,19 @@ public final class SyntheticParts {
         double qg = 15e-9 * die * (0.8 + r.nextDouble() * 0.5);
         double hotTemp = r.nextBoolean() ? 150 : 175;
         double maxTj = hotTemp;
+        double rdsHot = rds * (1.6 + r.nextDouble() * 0.5);
+        double rthJunctionCase = 2.0 / die + 0.2;
+        // Continuous rating as datasheets state it (common practice): the current whose conduction
+        // loss at the hot R_DS(on) lifts the junction from a 25 °C case to T_j,max, here with 10 % to
+        // spare, capped by the package; pulsed rating four times that.
+        double continuous = Math.min(300, 0.9 * Math.sqrt((maxTj - 25) / (rthJunctionCase * rdsHot)));
         return new PowerSwitch(String.format("SQ-%05d", index), "synthetic " + (int) vds + " V switch",
-                die > 5 ? "PKG-L" : "PKG-S", vds, Math.min(300, 20 * die), Math.min(1200, 80 * die),
-                rds, rds * (1.6 + r.nextDouble() * 0.5), hotTemp,
+                die > 5 ? "PKG-L" : "PKG-S", vds, continuous, 4 * continuous,
+                rds, rdsHot, hotTemp,
                 qg, qg * (0.25 + r.nextDouble() * 0.1), qg * (0.2 + r.nextDouble() * 0.15),
                 3 + r.nextDouble() * 2.5, 0.5 + r.nextDouble() * 2.5, 150e-12 * die * Math.sqrt(60 / vds),
                 0.7 + r.nextDouble() * 0.3, (10 + r.nextDouble() * 40) * 1e-9 * Math.sqrt(die),
-                2.0 / die + 0.2, maxTj, Math.round((0.3 + die * 0.4 * (vds / 60)) * 100) / 100.0);
+                rthJunctionCase, maxTj, Math.round((0.3 + die * 0.4 * (vds / 60)) * 100) / 100.0);
     }
 
     /**

@@ -56,6 +56,22 @@ class SyntheticPartsTest {
         assertTrue(SyntheticParts.powerSwitch(0, 1).rdsOn() > 0);
     }
 
+    /**
+     * Generated parts pass the catalog's own plausibility checks (continuous current within what the
+     * package sheds, heat capacity within what the motor's mass can store), so scale runs measure
+     * realistic parts rather than thousands of warnings.
+     */
+    @Test
+    void generatedPartsDrawNoPlausibilityWarnings() {
+        Catalog catalog = SyntheticParts.catalog(400, 800, 3);
+        long motorWarnings = catalog.motors().stream()
+                .mapToLong(m -> dev.yoke.catalog.Plausibility.motorWarnings(m).size()).sum();
+        long switchWarnings = catalog.switches().stream()
+                .mapToLong(q -> dev.yoke.catalog.Plausibility.switchWarnings(q).size()).sum();
+        assertEquals(0, motorWarnings, "motor warnings");
+        assertEquals(0, switchWarnings, "switch warnings");
+    }
+
     @Test
     void theProfileRepeatsFromRestAndHasTheAskedShape() {
         Scenario s = SyntheticParts.scenario(10, 3, 4, 2);
