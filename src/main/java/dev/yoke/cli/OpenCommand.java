@@ -72,6 +72,10 @@ public final class OpenCommand implements Callable<Integer> {
         LoadedCatalog catalog;
         LoadedScenario scenario;
         List<Problem> problems = new ArrayList<>();
+        // Reading a catalog of thousands of parts takes seconds before the screen can open: say so.
+        String reading = "yoke: reading the catalog " + catalogDir + " and the scenario...";
+        err.print(reading + "\r");
+        err.flush();
         try {
             catalog = CatalogLoader.load(catalogDir);
         } catch (InputException e) {
@@ -84,6 +88,8 @@ public final class OpenCommand implements Callable<Integer> {
             problems.addAll(e.problems());
             scenario = null;
         }
+        err.print(" ".repeat(reading.length()) + "\r");
+        err.flush();
         if (catalog == null || scenario == null) {
             for (Problem p : problems) {
                 err.println(p);
