@@ -23,7 +23,8 @@ public final class MotorEditing extends PartEditing<Motor> {
         // back-EMF and speed constants: the model does not keep them, the loader turns them into
         // the torque constant.
         super("motor", "motors", PartKind.MOTOR, Set.of("back_emf_constant", "speed_constant"),
-                PartRules::motorErrors, Plausibility::motorWarnings);
+                PartRules::motorErrors, Plausibility::motorWarnings,
+                Motor::id, Motor::label, Catalog::motors);
     }
 
     @Override
@@ -55,26 +56,12 @@ public final class MotorEditing extends PartEditing<Motor> {
     @Override
     public Motor build(Map<String, Object> v) {
         return new Motor((String) v.get("id"), (String) v.get("label"),
-                number(v, "nominal_voltage"), number(v, "resistance"), number(v, "resistance_temp"), number(v, "inductance"),
-                number(v, "torque_constant"), number(v, "no_load_current"), number(v, "continuous_current"),
-                number(v, "peak_current"), number(v, "max_speed"), number(v, "rotor_inertia"), number(v, "rth_winding_housing"),
-                number(v, "rth_housing_ambient"), number(v, "tau_winding"), number(v, "tau_housing"), number(v, "max_winding_temp"),
-                number(v, "brush_drop"), number(v, "mass"), number(v, "price"));
-    }
-
-    @Override
-    public String id(Motor part) {
-        return part.id();
-    }
-
-    @Override
-    public String label(Motor part) {
-        return part.label();
-    }
-
-    @Override
-    public List<Motor> parts(Catalog catalog) {
-        return catalog.motors();
+                number(v, "nominal_voltage"), number(v, "resistance"),
+                number(v, "resistance_temp"), number(v, "inductance"), number(v, "torque_constant"),
+                number(v, "no_load_current"), number(v, "continuous_current"), number(v, "peak_current"),
+                number(v, "max_speed"), number(v, "rotor_inertia"), number(v, "rth_winding_housing"),
+                number(v, "rth_housing_ambient"), number(v, "tau_winding"), number(v, "tau_housing"),
+                number(v, "max_winding_temp"), number(v, "brush_drop"), number(v, "mass"), number(v, "price"));
     }
 
     @Override

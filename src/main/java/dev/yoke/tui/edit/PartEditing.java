@@ -3,6 +3,7 @@ package dev.yoke.tui.edit;
 import dev.yoke.catalog.PartFields;
 import dev.yoke.catalog.PartKind;
 import dev.yoke.catalog.PartRules;
+import dev.yoke.model.Catalog;
 
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -25,15 +26,23 @@ abstract class PartEditing<T> implements EditablePart<T> {
     private final List<FormField> fields;
     private final List<FormRule> rules;
     private final List<FormRule> doubts;
+    private final Function<T, String> id;
+    private final Function<T, String> label;
+    private final Function<Catalog, List<T>> parts;
 
     /**
      * @param notEdited field-table keys the form leaves out
      * @param errors    the catalog's blocking checks of a whole record
      * @param warnings  the catalog's plausibility checks, shown but never blocking
+     * @param parts     the parts of this kind in a catalog
      */
     PartEditing(String noun, String plural, PartKind kind, Set<String> notEdited,
-                Function<T, List<PartRules.FieldIssue>> errors, Function<T, List<PartRules.FieldIssue>> warnings) {
+                Function<T, List<PartRules.FieldIssue>> errors, Function<T, List<PartRules.FieldIssue>> warnings,
+                Function<T, String> id, Function<T, String> label, Function<Catalog, List<T>> parts) {
         this.noun = noun;
+        this.id = id;
+        this.label = label;
+        this.parts = parts;
         this.plural = plural;
         this.fields = PartFields.of(kind).stream()
                 .filter(f -> !notEdited.contains(f.key()))
@@ -67,6 +76,21 @@ abstract class PartEditing<T> implements EditablePart<T> {
     @Override
     public final List<FormRule> doubts() {
         return doubts;
+    }
+
+    @Override
+    public final String id(T part) {
+        return id.apply(part);
+    }
+
+    @Override
+    public final String label(T part) {
+        return label.apply(part);
+    }
+
+    @Override
+    public final List<T> parts(Catalog catalog) {
+        return parts.apply(catalog);
     }
 
     /** The catalog's issues by field, first message per field. */

@@ -21,7 +21,8 @@ public final class SwitchEditing extends PartEditing<PowerSwitch> {
 
     private SwitchEditing() {
         super("switch", "switches", PartKind.SWITCH, Set.of(),
-                PartRules::switchErrors, Plausibility::switchWarnings);
+                PartRules::switchErrors, Plausibility::switchWarnings,
+                PowerSwitch::id, PowerSwitch::label, Catalog::switches);
     }
 
     @Override
@@ -53,26 +54,11 @@ public final class SwitchEditing extends PartEditing<PowerSwitch> {
     @Override
     public PowerSwitch build(Map<String, Object> v) {
         return new PowerSwitch((String) v.get("id"), (String) v.get("label"), (String) v.get("package"),
-                number(v, "vds_max"), number(v, "id_continuous"), number(v, "id_pulsed"), number(v, "rds_on"), number(v, "rds_on_hot"),
-                number(v, "rds_on_hot_temp"), number(v, "qg"), number(v, "qgs"),
-                number(v, "qgd"), number(v, "plateau_voltage"), number(v, "gate_resistance_internal"),
-                number(v, "coss"), number(v, "diode_vf"), number(v, "qrr"),
-                number(v, "rth_jc"), number(v, "tj_max"), number(v, "price"));
-    }
-
-    @Override
-    public String id(PowerSwitch part) {
-        return part.id();
-    }
-
-    @Override
-    public String label(PowerSwitch part) {
-        return part.label();
-    }
-
-    @Override
-    public List<PowerSwitch> parts(Catalog catalog) {
-        return catalog.switches();
+                number(v, "vds_max"),
+                number(v, "id_continuous"), number(v, "id_pulsed"), number(v, "rds_on"), number(v, "rds_on_hot"),
+                number(v, "rds_on_hot_temp"), number(v, "qg"), number(v, "qgs"), number(v, "qgd"),
+                number(v, "plateau_voltage"), number(v, "gate_resistance_internal"), number(v, "coss"),
+                number(v, "diode_vf"), number(v, "qrr"), number(v, "rth_jc"), number(v, "tj_max"), number(v, "price"));
     }
 
     @Override
