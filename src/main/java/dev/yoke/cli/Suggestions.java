@@ -1,5 +1,6 @@
 package dev.yoke.cli;
 
+import dev.yoke.catalog.EditDistance;
 import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
@@ -14,30 +15,10 @@ final class Suggestions {
     static String closest(String typed, List<String> known) {
         String t = typed.toLowerCase(Locale.ROOT);
         return known.stream()
-                .map(k -> new Object[] {k, distance(t, k.toLowerCase(Locale.ROOT))})
+                .map(k -> new Object[] {k, EditDistance.between(t, k.toLowerCase(Locale.ROOT))})
                 .filter(p -> (int) p[1] <= Math.max(2, typed.length() / 2))
                 .min(Comparator.comparingInt((Object[] p) -> (int) p[1]).thenComparing(p -> (String) p[0]))
                 .map(p -> (String) p[0])
                 .orElse(null);
-    }
-
-    /** Edit distance: insertions, deletions and substitutions, one each. */
-    static int distance(String a, String b) {
-        int[] prev = new int[b.length() + 1];
-        int[] cur = new int[b.length() + 1];
-        for (int j = 0; j <= b.length(); j++) {
-            prev[j] = j;
-        }
-        for (int i = 1; i <= a.length(); i++) {
-            cur[0] = i;
-            for (int j = 1; j <= b.length(); j++) {
-                int cost = a.charAt(i - 1) == b.charAt(j - 1) ? 0 : 1;
-                cur[j] = Math.min(Math.min(cur[j - 1] + 1, prev[j] + 1), prev[j - 1] + cost);
-            }
-            int[] swap = prev;
-            prev = cur;
-            cur = swap;
-        }
-        return prev[b.length()];
     }
 }
