@@ -162,12 +162,9 @@ public final class DriveEvaluator implements PairingEvaluator {
         int fi = plan.frequencyIndex;
         double gate = plan.gateSwitchesAverage * s.gateLossPerSwitch[fi];
         double energyIn = (plan.terminalPowerAverage + bridge) * plan.cycleTime;
-        double marginHeadroom = plan.availableVoltage > 0
-                ? Margins.of(plan.availableVoltage, plan.availableVoltage - headroomVolts)
+        double marginHeadroom = plan.n == 0 ? Margins.of(plan.availableVoltage, 0)
+                : plan.availableVoltage > 0 ? Margins.of(plan.availableVoltage, plan.availableVoltage - headroomVolts)
                 : -1.0;
-        if (plan.n == 0) {
-            marginHeadroom = Margins.of(plan.availableVoltage, 0);
-        }
         double marginJunction = Margins.of(s.junctionLimit, tjMax);
 
         row[Metric.MARGIN_VDS.ordinal()] = s.marginVds;
@@ -185,7 +182,7 @@ public final class DriveEvaluator implements PairingEvaluator {
         int binding = 0;
         double bindingMargin = row[Metric.MARGIN_VDS.ordinal()];
         int first = Metric.MARGIN_VDS.ordinal();
-        for (int c = 1; c < Constraint.values().length; c++) {
+        for (int c = 1; c < CONSTRAINTS.length; c++) {
             double v = row[first + c];
             if (v < bindingMargin) {
                 bindingMargin = v;
@@ -219,6 +216,9 @@ public final class DriveEvaluator implements PairingEvaluator {
         row[Metric.COST.ordinal()] = m.price() + 4 * q.price();
         row[Metric.MASS.ordinal()] = m.mass();
     }
+
+    /** Shared copy of {@code Constraint.values()}: the enum hands out a fresh array on every call. */
+    private static final Constraint[] CONSTRAINTS = Constraint.values();
 
     /** Headroom margin below which {@link Advisory#LOW_HEADROOM} is raised (common practice: keep 10 % for control). */
     static final double LOW_HEADROOM = 0.10;
