@@ -7,7 +7,6 @@ import dev.yoke.model.PowerSwitch;
 import dev.yoke.model.Scenario;
 import dev.yoke.physics.ConductionPattern;
 import dev.yoke.physics.Copper;
-import dev.yoke.physics.SwitchLossLaws;
 import java.util.ArrayList;
 import java.util.EnumMap;
 import java.util.EnumSet;
@@ -162,12 +161,9 @@ public final class DriveEvaluator implements PairingEvaluator {
         int fi = plan.frequencyIndex;
         double gate = plan.gateSwitchesAverage * s.gateLossPerSwitch[fi];
         double energyIn = (plan.terminalPowerAverage + bridge) * plan.cycleTime;
-        double marginHeadroom = plan.availableVoltage > 0
-                ? Margins.of(plan.availableVoltage, plan.availableVoltage - headroomVolts)
+        double marginHeadroom = plan.n == 0 ? Margins.of(plan.availableVoltage, 0)
+                : plan.availableVoltage > 0 ? Margins.of(plan.availableVoltage, plan.availableVoltage - headroomVolts)
                 : -1.0;
-        if (plan.n == 0) {
-            marginHeadroom = Margins.of(plan.availableVoltage, 0);
-        }
         double marginJunction = Margins.of(s.junctionLimit, tjMax);
 
         row[Metric.MARGIN_VDS.ordinal()] = s.marginVds;
@@ -185,7 +181,7 @@ public final class DriveEvaluator implements PairingEvaluator {
         int binding = 0;
         double bindingMargin = row[Metric.MARGIN_VDS.ordinal()];
         int first = Metric.MARGIN_VDS.ordinal();
-        for (int c = 1; c < Constraint.values().length; c++) {
+        for (int c = 1; c < CONSTRAINTS.length; c++) {
             double v = row[first + c];
             if (v < bindingMargin) {
                 bindingMargin = v;
@@ -220,6 +216,9 @@ public final class DriveEvaluator implements PairingEvaluator {
         row[Metric.MASS.ordinal()] = m.mass();
     }
 
+    /** Shared copy of {@code Constraint.values()}: the enum hands out a fresh array on every call. */
+    private static final Constraint[] CONSTRAINTS = Constraint.values();
+
     /** Headroom margin below which {@link Advisory#LOW_HEADROOM} is raised (common practice: keep 10 % for control). */
     static final double LOW_HEADROOM = 0.10;
 
@@ -250,20 +249,16 @@ public final class DriveEvaluator implements PairingEvaluator {
         SwitchConstants s = switches[switchIndex];
         double[] row = new double[Metric.COUNT];
         summarize(plan, switchIndex, row);
-        Bench bench = scenario.bench();
-        int fi = frequency;
-        double f = plan.frequency;
-        double bus = bench.busVoltage();
         int segmentCount = scenario.profile().segments().size();
         List<SegmentResult> segments = new ArrayList<>(segmentCount);
         int k = 0;
         for (int seg = 0; seg < segmentCount; seg++) {
             SegmentAccumulator acc = new SegmentAccumulator(scenario.profile().segments().get(seg).label());
             while (k < plan.n && plan.pieces[k].segmentIndex() == seg) {
-                acc.add(plan, s, k, fi, f, bus, ambient);
+                acc.add(plan, s, k, frequency, ambient);
                 k++;
             }
-            segments.add(acc.result(plan, s, fi, ambient));
+            segments.add(acc.result(plan, s, frequency, ambient));
         }
         Map<Constraint, Double> margins = new EnumMap<>(Constraint.class);
         for (Constraint c : Constraint.values()) {
@@ -282,8 +277,8 @@ public final class DriveEvaluator implements PairingEvaluator {
                 row[Metric.EFFICIENCY.ordinal()], row[Metric.ENERGY_IN.ordinal()], row[Metric.ENERGY_OUT.ordinal()],
                 row[Metric.JUNCTION_TEMP_MAX.ordinal()], row[Metric.WINDING_TEMP_MAX.ordinal()],
                 row[Metric.COST.ordinal()], row[Metric.MASS.ordinal()]);
-        return new PairingResult(plan.motor, s.part, f, plan.ratio, margins,
-                Constraint.values()[(int) row[Metric.BINDING.ordinal()]], advisories, totals, segments);
+        return new PairingResult(plan.motor, s.part, plan.frequency, plan.ratio, margins,
+                CONSTRAINTS[(int) row[Metric.BINDING.ordinal()]], advisories, totals, segments);
     }
 
     /** Collects the pieces of one segment into its {@link SegmentResult}: time averages and worst points. */
@@ -314,13 +309,14 @@ public final class DriveEvaluator implements PairingEvaluator {
             this.label = label;
         }
 
-        void add(MotorSidePlan plan, SwitchConstants s, int k, int fi, double f, double busVoltage, double ambient) {
+        void add(MotorSidePlan plan, SwitchConstants s, int k, int fi, double ambient) {
             double t = plan.pieces[k].duration();
             duration += t;
-            for (double w : new double[] {plan.motorSpeedStart[k], plan.motorSpeedEnd[k]}) {
-                if (Math.abs(w) > Math.abs(speed)) {
-                    speed = w;
-                }
+            if (Math.abs(plan.motorSpeedStart[k]) > Math.abs(speed)) {
+                speed = plan.motorSpeedStart[k];
+            }
+            if (Math.abs(plan.motorSpeedEnd[k]) > Math.abs(speed)) {
+                speed = plan.motorSpeedEnd[k];
             }
             torque += t * plan.motorTorque[k];
             currentSum += t * plan.current[k];
@@ -343,9 +339,9 @@ public final class DriveEvaluator implements PairingEvaluator {
                 double[] l = loss[p];
                 l[0] += t * (cell - b);
                 l[1] += t * plan.hardCurrent[c] * s.edgeLossPerAmp[fi];
-                l[2] += t * plan.hard[c] * SwitchLossLaws.outputCapacitance(s.part.outputCapacitance(), busVoltage, f);
+                l[2] += t * plan.hard[c] * s.capacitanceLoss[fi];
                 l[3] += t * plan.freeCurrent[c] * s.diodeLossPerAmp[fi];
-                l[4] += t * plan.hard[c] * SwitchLossLaws.reverseRecovery(s.part.reverseRecoveryCharge(), busVoltage, f);
+                l[4] += t * plan.hard[c] * s.recoveryLoss[fi];
                 junction[p] = Math.max(junction[p], tj);
                 bridge += cell;
             }

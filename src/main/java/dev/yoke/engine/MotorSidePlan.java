@@ -192,7 +192,9 @@ final class MotorSidePlan implements PairingEvaluator.MotorSide {
             boolean lossMoved = pass == 0;
             for (int k = 0; k < n; k++) {
                 double r = Copper.resistanceAt(motor.resistance(), motor.resistanceTemp(), windingMeanTemp[k]);
-                double ms = current[k] * current[k] + rippleVariance(ripples, modulation, bus, r, k, kt, motor);
+                double v0 = DcMotor.terminalVoltage(current[k], r, kt, motorSpeedStart[k], motor.brushDrop());
+                double v1 = DcMotor.terminalVoltage(current[k], r, kt, motorSpeedEnd[k], motor.brushDrop());
+                double ms = current[k] * current[k] + rippleVariance(ripples, modulation, bus, r, v0, v1);
                 double slope = ms * r20 * Copper.ALPHA_20;
                 lossMoved |= Math.abs(slope - lossSlope[k]) > LOSS_TOLERANCE * slope;
                 lossAtAmbient[k] = ms * r20 * (1 + Copper.ALPHA_20 * (ambient - Copper.REFERENCE_TEMP));
@@ -245,7 +247,7 @@ final class MotorSidePlan implements PairingEvaluator.MotorSide {
             duty = Math.max(duty, Math.max(ConductionPattern.highSideDuty(modulation, v0 / bus),
                     ConductionPattern.highSideDuty(modulation, v1 / bus)));
 
-            double variance = rippleVariance(ripples, modulation, bus, r, k, kt, motor);
+            double variance = rippleVariance(ripples, modulation, bus, r, v0, v1);
             double ms = i * i + variance;
             meanSquare[k] = ms;
             sumSquare += weight[k] * ms;
@@ -440,11 +442,8 @@ final class MotorSidePlan implements PairingEvaluator.MotorSide {
     }
 
     /** Ripple variance averaged over the piece's voltage ramp (Simpson's rule on start, middle and end). */
-    private double rippleVariance(RippleCache ripples, Modulation modulation, double bus, double r, int k, double kt,
-            Motor m) {
-        double i = current[k];
-        double v0 = DcMotor.terminalVoltage(i, r, kt, motorSpeedStart[k], m.brushDrop());
-        double v1 = DcMotor.terminalVoltage(i, r, kt, motorSpeedEnd[k], m.brushDrop());
+    private static double rippleVariance(RippleCache ripples, Modulation modulation, double bus, double r, double v0,
+            double v1) {
         double vm = (v0 + v1) / 2;
         double a = ripples.get(r, ConductionPattern.rippleOnFraction(modulation, v0 / bus)).variance();
         double b = ripples.get(r, ConductionPattern.rippleOnFraction(modulation, vm / bus)).variance();

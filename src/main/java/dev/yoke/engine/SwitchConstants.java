@@ -31,6 +31,9 @@ final class SwitchConstants {
     final double turnOffTime;
     /** Per frequency: loss per hard-switching position independent of current (C_oss and Q_rr), W. */
     final double[] fixedHardLoss;
+    /** Per frequency: the C_oss and the Q_rr parts of {@link #fixedHardLoss}, W (the detailed breakdown). */
+    final double[] capacitanceLoss;
+    final double[] recoveryLoss;
     /** Per frequency: V·I overlap loss per ampere of a hard-switching position, W/A. */
     final double[] edgeLossPerAmp;
     /** Per frequency: dead-time diode loss per ampere of a freewheeling position, W/A. */
@@ -61,14 +64,17 @@ final class SwitchConstants {
         List<Double> frequencies = bench.pwmFrequencies();
         int nf = frequencies.size();
         fixedHardLoss = new double[nf];
+        capacitanceLoss = new double[nf];
+        recoveryLoss = new double[nf];
         edgeLossPerAmp = new double[nf];
         diodeLossPerAmp = new double[nf];
         gateLossPerSwitch = new double[nf];
         double v = bench.busVoltage();
         for (int i = 0; i < nf; i++) {
             double f = frequencies.get(i);
-            fixedHardLoss[i] = SwitchLossLaws.outputCapacitance(q.outputCapacitance(), v, f)
-                    + SwitchLossLaws.reverseRecovery(q.reverseRecoveryCharge(), v, f);
+            capacitanceLoss[i] = SwitchLossLaws.outputCapacitance(q.outputCapacitance(), v, f);
+            recoveryLoss[i] = SwitchLossLaws.reverseRecovery(q.reverseRecoveryCharge(), v, f);
+            fixedHardLoss[i] = capacitanceLoss[i] + recoveryLoss[i];
             edgeLossPerAmp[i] = SwitchLossLaws.hardSwitching(v, 1.0, turnOnEdge, turnOffEdge, f);
             diodeLossPerAmp[i] = SwitchLossLaws.deadTimeDiode(q.diodeForwardVoltage(), 1.0, bench.deadTime(), f);
             gateLossPerSwitch[i] = SwitchLossLaws.gateDrive(q.gateCharge(), bench.gateDriveVoltage(), f);

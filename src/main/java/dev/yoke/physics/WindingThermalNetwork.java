@@ -142,6 +142,8 @@ public final class WindingThermalNetwork {
         // Spectral projectors M1 = (A − λ2 I)/(λ1 − λ2), M2 = I − M1.
         final double m11, m12, m21, m22;
         final double u1, u2;
+        // Spectral parts of the forcing: M1·u (first row) and the rest, the same for every start state.
+        final double qa, qb;
         final double f11, f12, f21, f22;
         final double g1, g2;
         // e^(λt), h1(λt) and h2(λt) of both eigenvalues over the whole piece, reused for its mean and end.
@@ -169,6 +171,8 @@ public final class WindingThermalNetwork {
             m12 = a12 / s;
             m21 = a21 / s;
             m22 = (a22 - l2) / s;
+            qa = m11 * u1 + m12 * u2;
+            qb = u1 - qa;
             e1 = Math.exp(l1 * t);
             e2 = Math.exp(l2 * t);
             f11 = e1 * m11 + e2 * (1 - m11);
@@ -185,28 +189,20 @@ public final class WindingThermalNetwork {
             g2 = (p1 - p2) * m21 * u1 + (p1 * m22 + p2 * (1 - m22)) * u2;
         }
 
-        /** Winding rise at time τ into the piece from state (xw, xh). */
-        double windingAt(double tau, double xw, double xh) {
-            double pa = m11 * xw + m12 * xh;
-            double pb = xw - pa;
-            double qa = m11 * u1 + m12 * u2;
-            double qb = u1 - qa;
+        /** Winding rise at time τ into the piece, from the start state's spectral parts pa, pb. */
+        double windingAt(double tau, double pa, double pb) {
             return Math.exp(l1 * tau) * pa + Math.exp(l2 * tau) * pb + tau * h1(l1 * tau) * qa + tau * h1(l2 * tau) * qb;
         }
 
         double meanWinding(double xw, double xh) {
             double pa = m11 * xw + m12 * xh;
             double pb = xw - pa;
-            double qa = m11 * u1 + m12 * u2;
-            double qb = u1 - qa;
             return k1 * pa + k2 * pb + t * (j1 * qa + j2 * qb);
         }
 
         double peakWinding(double xw, double xh) {
             double pa = m11 * xw + m12 * xh;
             double pb = xw - pa;
-            double qa = m11 * u1 + m12 * u2;
-            double qb = u1 - qa;
             double end = e1 * pa + e2 * pb + t * k1 * qa + t * k2 * qb;
             double best = Math.max(xw, end);
             double ga = l1 * pa + qa;
@@ -216,7 +212,7 @@ public final class WindingThermalNetwork {
                 if (ratio > 0) {
                     double tau = Math.log(ratio) / (l1 - l2);
                     if (tau > 0 && tau < t) {
-                        best = Math.max(best, windingAt(tau, xw, xh));
+                        best = Math.max(best, windingAt(tau, pa, pb));
                     }
                 }
             }
