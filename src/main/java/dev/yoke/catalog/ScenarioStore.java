@@ -9,7 +9,6 @@ import dev.yoke.units.Units;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
-import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -55,15 +54,7 @@ public final class ScenarioStore {
      */
     public static LoadedScenario save(Scenario scenario, Path file, CatalogFile loadedAs)
             throws IOException, InputException, ChangedOnDiskException {
-        byte[] now;
-        try {
-            now = Files.readAllBytes(file);
-        } catch (NoSuchFileException e) {
-            throw new ChangedOnDiskException(file);
-        }
-        if (now.length != loadedAs.size() || !CatalogStore.sha256(now).equalsIgnoreCase(loadedAs.sha256())) {
-            throw new ChangedOnDiskException(file);
-        }
+        byte[] now = loadedAs.readUnchanged(file);
         return write(scenario, file, headerOf(new String(now, StandardCharsets.UTF_8)));
     }
 
