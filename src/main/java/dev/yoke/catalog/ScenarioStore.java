@@ -13,8 +13,6 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
-import java.util.function.Function;
-import java.util.stream.Collectors;
 
 /**
  * Saves a scenario file: the whole file is written anew from the scenario (a scenario is small
@@ -185,22 +183,8 @@ public final class ScenarioStore {
             if (value == null || value instanceof String text && text.isEmpty()) {
                 continue;
             }
-            line(out, depth, spec.key(), scalar(spec, value));
+            line(out, depth, spec.key(), spec.scalar(value));
         }
-    }
-
-    private static String scalar(FieldSpec spec, Object value) {
-        Function<Double, String> number = v -> Units.formatExact(v, spec.dimension());
-        if (value instanceof Double v) {
-            return number.apply(v);
-        }
-        if (value instanceof List<?> list) {
-            return list.stream().map(v -> number.apply((Double) v)).collect(Collectors.joining(", ", "[", "]"));
-        }
-        if (value instanceof Boolean b) {
-            return b.toString();
-        }
-        return CatalogText.scalar(value.toString());
     }
 
     private static void line(StringBuilder out, int depth, String key, String scalar) {
