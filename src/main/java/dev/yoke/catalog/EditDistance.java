@@ -1,13 +1,13 @@
 package dev.yoke.catalog;
 
 /** Levenshtein distance (Levenshtein 1966; Wagner–Fischer dynamic programme), for "did you mean" hints. */
-final class EditDistance {
+public final class EditDistance {
 
     private EditDistance() {
     }
 
     /** The fewest single-character insertions, deletions or substitutions turning {@code a} into {@code b}. */
-    static int between(String a, String b) {
+    public static int between(String a, String b) {
         int[] previous = new int[b.length() + 1];
         int[] current = new int[b.length() + 1];
         for (int j = 0; j <= b.length(); j++) {

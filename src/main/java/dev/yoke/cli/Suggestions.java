@@ -1,5 +1,6 @@
 package dev.yoke.cli;
 
+import dev.yoke.catalog.EditDistance;
 import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
@@ -23,21 +24,6 @@ final class Suggestions {
 
     /** Edit distance: insertions, deletions and substitutions, one each. */
     static int distance(String a, String b) {
-        int[] prev = new int[b.length() + 1];
-        int[] cur = new int[b.length() + 1];
-        for (int j = 0; j <= b.length(); j++) {
-            prev[j] = j;
-        }
-        for (int i = 1; i <= a.length(); i++) {
-            cur[0] = i;
-            for (int j = 1; j <= b.length(); j++) {
-                int cost = a.charAt(i - 1) == b.charAt(j - 1) ? 0 : 1;
-                cur[j] = Math.min(Math.min(cur[j - 1] + 1, prev[j] + 1), prev[j - 1] + cost);
-            }
-            int[] swap = prev;
-            prev = cur;
-            cur = swap;
-        }
-        return prev[b.length()];
+        return EditDistance.between(a, b);
     }
 }
