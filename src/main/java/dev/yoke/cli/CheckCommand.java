@@ -15,6 +15,7 @@ import java.util.List;
 import java.util.concurrent.Callable;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
@@ -27,9 +28,8 @@ import picocli.CommandLine.Parameters;
         description = "Validate the parts catalog and scenario files; report every problem with its file and line.")
 public final class CheckCommand implements Callable<Integer> {
 
-    @Option(names = "--catalog", paramLabel = "DIR", defaultValue = "catalog",
-            description = "Catalog folder: every *.yaml file in it (default: ${DEFAULT-VALUE}).")
-    Path catalogDir;
+    @Mixin
+    CatalogOption catalogOption;
 
     @Parameters(paramLabel = "SCENARIO", arity = "0..*", description = "Scenario files to check against the catalog.")
     List<Path> scenarios = new ArrayList<>();
@@ -45,7 +45,7 @@ public final class CheckCommand implements Callable<Integer> {
         List<Problem> warnings = new ArrayList<>();
         LoadedCatalog catalog = null;
         try {
-            catalog = CatalogLoader.load(catalogDir);
+            catalog = CatalogLoader.load(catalogOption.catalogDir);
             warnings.addAll(catalog.warnings());
         } catch (InputException e) {
             split(e.problems(), errors, warnings);
@@ -73,7 +73,7 @@ public final class CheckCommand implements Callable<Integer> {
             return YokeCommand.BAD_INPUT;
         }
         Catalog parts = catalog.catalog();
-        out.printf("catalog %s: %d motors, %d switches in %d files%n", catalogDir, parts.motors().size(),
+        out.printf("catalog %s: %d motors, %d switches in %d files%n", catalogOption.catalogDir, parts.motors().size(),
                 parts.switches().size(), catalog.files().size());
         for (LoadedScenario s : loaded) {
             Bench b = s.scenario().bench();

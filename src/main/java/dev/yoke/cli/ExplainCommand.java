@@ -15,13 +15,12 @@ import dev.yoke.units.Dimension;
 import dev.yoke.units.UnitException;
 import dev.yoke.units.Units;
 import java.io.PrintWriter;
-import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
 
 /**
  * {@code yoke explain}: the whole evaluation of one pairing, segment by segment, with every
@@ -31,8 +30,8 @@ import picocli.CommandLine.Parameters;
         description = "Show why one pairing passes or fails: per-segment currents, losses, temperatures and margins.")
 public final class ExplainCommand implements Callable<Integer> {
 
-    @Parameters(index = "0", paramLabel = "SCENARIO", description = "Scenario file (bench and duty profile).")
-    Path scenarioFile;
+    @Mixin
+    ScenarioArgument scenarioArgument;
 
     @Option(names = "--motor", paramLabel = "ID", required = true, description = "Motor id from the catalog.")
     String motorId;
@@ -48,9 +47,8 @@ public final class ExplainCommand implements Callable<Integer> {
             description = "Gear ratio (default: the bench's first). Need not be one of the bench's.")
     String ratio;
 
-    @Option(names = "--catalog", paramLabel = "DIR", defaultValue = "catalog",
-            description = "Catalog folder: every *.yaml file in it (default: ${DEFAULT-VALUE}).")
-    Path catalogDir;
+    @Mixin
+    CatalogOption catalogOption;
 
     @Option(names = "--json", description = "Print one JSON object (fields in docs/json-report.md).")
     boolean json;
@@ -64,7 +62,7 @@ public final class ExplainCommand implements Callable<Integer> {
         PrintWriter err = spec.commandLine().getErr();
         Inputs inputs;
         try {
-            inputs = Inputs.load(scenarioFile, catalogDir, err);
+            inputs = Inputs.load(scenarioArgument.scenarioFile, catalogOption.catalogDir, err);
         } catch (InputException e) {
             return Inputs.report(e, err);
         }
@@ -76,10 +74,10 @@ public final class ExplainCommand implements Callable<Integer> {
         int powerSwitch = switchIds.indexOf(switchId);
         if (motor < 0 || powerSwitch < 0) {
             if (motor < 0) {
-                err.println("yoke explain: --motor: no motor '" + motorId + "' in " + catalogDir + hint(motorId, motorIds));
+                err.println("yoke explain: --motor: no motor '" + motorId + "' in " + catalogOption.catalogDir + hint(motorId, motorIds));
             }
             if (powerSwitch < 0) {
-                err.println("yoke explain: --switch: no switch '" + switchId + "' in " + catalogDir + hint(switchId, switchIds));
+                err.println("yoke explain: --switch: no switch '" + switchId + "' in " + catalogOption.catalogDir + hint(switchId, switchIds));
             }
             err.flush();
             return YokeCommand.BAD_INPUT;

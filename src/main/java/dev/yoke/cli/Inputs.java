@@ -25,6 +25,22 @@ record Inputs(LoadedScenario scenario, LoadedCatalog catalog) {
      * @throws InputException with the problems of both files
      */
     static Inputs load(Path scenarioFile, Path catalogDir, PrintWriter err) throws InputException {
+        Inputs inputs = read(scenarioFile, catalogDir);
+        for (Problem w : inputs.catalog.warnings()) {
+            err.println(w);
+        }
+        for (Problem w : inputs.scenario.warnings()) {
+            err.println(w);
+        }
+        return inputs;
+    }
+
+    /**
+     * Loads both without printing anything (for the workbench, which shows warnings itself).
+     *
+     * @throws InputException with the problems of both files
+     */
+    static Inputs read(Path scenarioFile, Path catalogDir) throws InputException {
         List<Problem> problems = new ArrayList<>();
         LoadedCatalog catalog = null;
         LoadedScenario scenario = null;
@@ -40,12 +56,6 @@ record Inputs(LoadedScenario scenario, LoadedCatalog catalog) {
         }
         if (scenario == null || catalog == null) {
             throw new InputException(problems);
-        }
-        for (Problem w : catalog.warnings()) {
-            err.println(w);
-        }
-        for (Problem w : scenario.warnings()) {
-            err.println(w);
         }
         return new Inputs(scenario, catalog);
     }

@@ -1,12 +1,10 @@
 package dev.yoke.cli;
 
 import dev.yoke.catalog.CatalogFile;
-import dev.yoke.catalog.CatalogLoader;
 import dev.yoke.catalog.InputException;
 import dev.yoke.catalog.LoadedCatalog;
 import dev.yoke.catalog.LoadedScenario;
 import dev.yoke.catalog.Problem;
-import dev.yoke.catalog.ScenarioLoader;
 import dev.yoke.model.Scenario;
 import dev.yoke.tui.ColorDepth;
 import dev.yoke.tui.EditorHooks;
@@ -24,6 +22,7 @@ import java.util.Map;
 import java.util.concurrent.Callable;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
@@ -46,9 +45,8 @@ public final class OpenCommand implements Callable<Integer> {
             description = "Scenario file (default: ${DEFAULT-VALUE}).")
     Path scenarioFile;
 
-    @Option(names = "--catalog", paramLabel = "DIR", defaultValue = "catalog",
-            description = "Catalog folder: every *.yaml file in it (default: ${DEFAULT-VALUE}).")
-    Path catalogDir;
+    @Mixin
+    CatalogOption catalogOption;
 
     @Option(names = "--colors", paramLabel = "MODE", defaultValue = "auto",
             description = "auto (from TERM, COLORTERM, NO_COLOR), mono, basic (16) or full (256). Default: ${DEFAULT-VALUE}.")
@@ -69,34 +67,25 @@ public final class OpenCommand implements Callable<Integer> {
             err.println("yoke open: " + why + "; the workbench needs a terminal. For scripts use 'yoke rank'.");
             return YokeCommand.BAD_INPUT;
         }
-        LoadedCatalog catalog;
-        LoadedScenario scenario;
-        List<Problem> problems = new ArrayList<>();
         // Reading a catalog of thousands of parts takes seconds before the screen can open: say so.
-        String reading = "yoke: reading the catalog " + catalogDir + " and the scenario...";
+        String reading = "yoke: reading the catalog " + catalogOption.catalogDir + " and the scenario...";
         err.print(reading + "\r");
         err.flush();
+        Inputs inputs;
         try {
-            catalog = CatalogLoader.load(catalogDir);
+            inputs = Inputs.read(scenarioFile, catalogOption.catalogDir);
         } catch (InputException e) {
-            problems.addAll(e.problems());
-            catalog = null;
-        }
-        try {
-            scenario = ScenarioLoader.load(scenarioFile);
-        } catch (InputException e) {
-            problems.addAll(e.problems());
-            scenario = null;
-        }
-        err.print(" ".repeat(reading.length()) + "\r");
-        err.flush();
-        if (catalog == null || scenario == null) {
-            for (Problem p : problems) {
+            err.print(" ".repeat(reading.length()) + "\r");
+            for (Problem p : e.problems()) {
                 err.println(p);
             }
             err.flush();
             return YokeCommand.BAD_INPUT;
         }
+        err.print(" ".repeat(reading.length()) + "\r");
+        err.flush();
+        LoadedCatalog catalog = inputs.catalog();
+        LoadedScenario scenario = inputs.scenario();
         TerminalTraits traits = TerminalTraits.fromEnvironment(env);
         switch (colors) {
             case mono -> traits = traits.withColorDepth(ColorDepth.MONOCHROME);
@@ -133,6 +122,6 @@ public final class OpenCommand implements Callable<Integer> {
 
     /** The editors behind the workbench's edit keys: they save through the catalog package's stores. */
     private EditorHooks editors() {
-        return WorkbenchEditors.forFiles(catalogDir, scenarioFile);
+        return WorkbenchEditors.forFiles(catalogOption.catalogDir, scenarioFile);
     }
 }

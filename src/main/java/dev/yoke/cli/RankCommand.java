@@ -35,8 +35,8 @@ import java.util.Map;
 import java.util.concurrent.Callable;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
 
 /**
  * {@code yoke rank}: evaluates every pairing of the catalog against a scenario, sorts and filters
@@ -51,12 +51,11 @@ public final class RankCommand implements Callable<Integer> {
     /** Rows printed in the terminal when --top is not given. */
     static final int DEFAULT_SHOWN = 20;
 
-    @Parameters(index = "0", paramLabel = "SCENARIO", description = "Scenario file (bench and duty profile).")
-    Path scenarioFile;
+    @Mixin
+    ScenarioArgument scenarioArgument;
 
-    @Option(names = "--catalog", paramLabel = "DIR", defaultValue = "catalog",
-            description = "Catalog folder: every *.yaml file in it (default: ${DEFAULT-VALUE}).")
-    Path catalogDir;
+    @Mixin
+    CatalogOption catalogOption;
 
     @Option(names = "--sort", paramLabel = "KEY[,KEY...]",
             description = "Sort keys, most important first; KEY:desc sorts descending (KEY or KEY:asc ascending). "
@@ -139,7 +138,7 @@ public final class RankCommand implements Callable<Integer> {
 
         Inputs inputs;
         try {
-            inputs = Inputs.load(scenarioFile, catalogDir, err);
+            inputs = Inputs.load(scenarioArgument.scenarioFile, catalogOption.catalogDir, err);
         } catch (InputException e) {
             return Inputs.report(e, err);
         }
@@ -221,7 +220,7 @@ public final class RankCommand implements Callable<Integer> {
 
     private Map<String, String> describe(List<SortKey> keys, RowFilter filter) {
         Map<String, String> m = new LinkedHashMap<>();
-        m.put("catalog", catalogDir.toString());
+        m.put("catalog", catalogOption.catalogDir.toString());
         m.putAll(Meta.viewOptions(keys, filter));
         m.put("top", top == null ? "" : top.toString());
         return m;

@@ -2,26 +2,14 @@ package dev.yoke.tui;
 
 import java.util.List;
 
-/** The safety cautions screen: what the numbers are, and what they are not. */
+/**
+ * The safety cautions screen: what the numbers are, and what they are not. The wording is
+ * {@link dev.yoke.report.Cautions#PARAGRAPHS}, shared with the batch reports so the two cannot drift apart.
+ */
 public final class Cautions {
 
     private Cautions() {
     }
-
-    /** The cautions, one paragraph per entry. */
-    public static final List<String> PARAGRAPHS = List.of(
-            "Estimates for shortlisting. Every figure here comes from models with simplifying assumptions "
-                    + "and from catalog values that may be typical rather than worst case. They narrow the "
-                    + "choice; they are not a substitute for measuring the built drive.",
-            "High-current drives can burn. Motors, switches, wiring and batteries get hot enough to burn skin "
-                    + "and start fires, and a shorted bridge leg can destroy parts violently. Fuse the supply, "
-                    + "limit current while testing and keep flammable material away.",
-            "Battery and mains-powered equipment must follow local electrical codes and licensed practice. "
-                    + "Lithium packs and anything connected to the mains need protection, insulation and "
-                    + "wiring done to the rules where you are, by someone entitled to do it.",
-            "Verify temperatures on the real hardware. Measure case and winding temperatures under the real "
-                    + "duty cycle, at the highest ambient temperature expected, before relying on the margins "
-                    + "shown here.");
 
     /** The cautions laid out for a width. */
     public static List<Line> lines(int width) {
@@ -30,7 +18,7 @@ public final class Cautions {
         out.add(Line.blank());
         int wrap = Math.max(30, Math.min(width - 2, 96));
         int n = 1;
-        for (String p : PARAGRAPHS) {
+        for (String p : dev.yoke.report.Cautions.PARAGRAPHS) {
             List<String> wrapped = wrap(p, wrap - 4);
             for (int i = 0; i < wrapped.size(); i++) {
                 String lead = i == 0 ? " " + n + ". " : "    ";
