@@ -15,15 +15,10 @@ final class Suggestions {
     static String closest(String typed, List<String> known) {
         String t = typed.toLowerCase(Locale.ROOT);
         return known.stream()
-                .map(k -> new Object[] {k, distance(t, k.toLowerCase(Locale.ROOT))})
+                .map(k -> new Object[] {k, EditDistance.between(t, k.toLowerCase(Locale.ROOT))})
                 .filter(p -> (int) p[1] <= Math.max(2, typed.length() / 2))
                 .min(Comparator.comparingInt((Object[] p) -> (int) p[1]).thenComparing(p -> (String) p[0]))
                 .map(p -> (String) p[0])
                 .orElse(null);
-    }
-
-    /** Edit distance: insertions, deletions and substitutions, one each. */
-    static int distance(String a, String b) {
-        return EditDistance.between(a, b);
     }
 }

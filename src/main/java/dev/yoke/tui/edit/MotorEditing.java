@@ -1,6 +1,5 @@
 package dev.yoke.tui.edit;
 
-import dev.yoke.catalog.PartFields;
 import dev.yoke.catalog.PartKind;
 import dev.yoke.catalog.PartRules;
 import dev.yoke.catalog.Plausibility;
@@ -15,51 +14,17 @@ import java.util.Map;
 import java.util.Set;
 
 /** Motors in the parts editor: every {@link Motor} field with its unit and range. */
-public final class MotorEditing implements EditablePart<Motor> {
+public final class MotorEditing extends PartEditing<Motor> {
 
     /** The one instance. */
     public static final MotorEditing INSTANCE = new MotorEditing();
 
-    /** Keys the model does not keep: the loader turns them into the torque constant. */
-    private static final Set<String> NOT_EDITED = Set.of("back_emf_constant", "speed_constant");
-
-    private static final List<FormField> FIELDS = PartFields.of(PartKind.MOTOR).stream()
-            .filter(f -> !NOT_EDITED.contains(f.key()))
-            .map(FormField::of)
-            .toList();
-
-    private static final List<FormRule> RULES = List.of(FormRule.onRecord(
-            FIELDS.stream().map(FormField::key).toList(),
-            INSTANCE::build,
-            m -> issues(PartRules.motorErrors(m))));
-
     private MotorEditing() {
-    }
-
-    @Override
-    public String noun() {
-        return "motor";
-    }
-
-    @Override
-    public String plural() {
-        return "motors";
-    }
-
-    @Override
-    public List<FormField> fields() {
-        return FIELDS;
-    }
-
-    @Override
-    public List<FormRule> rules() {
-        return RULES;
-    }
-
-    @Override
-    public List<FormRule> doubts() {
-        return List.of(FormRule.onRecord(FIELDS.stream().map(FormField::key).toList(), INSTANCE::build,
-                m -> MotorEditing.issues(Plausibility.motorWarnings(m))));
+        // back-EMF and speed constants: the model does not keep them, the loader turns them into
+        // the torque constant.
+        super("motor", "motors", PartKind.MOTOR, Set.of("back_emf_constant", "speed_constant"),
+                PartRules::motorErrors, Plausibility::motorWarnings,
+                Motor::id, Motor::label, Catalog::motors);
     }
 
     @Override
@@ -91,39 +56,12 @@ public final class MotorEditing implements EditablePart<Motor> {
     @Override
     public Motor build(Map<String, Object> v) {
         return new Motor((String) v.get("id"), (String) v.get("label"),
-                d(v, "nominal_voltage"), d(v, "resistance"), d(v, "resistance_temp"), d(v, "inductance"),
-                d(v, "torque_constant"), d(v, "no_load_current"), d(v, "continuous_current"),
-                d(v, "peak_current"), d(v, "max_speed"), d(v, "rotor_inertia"), d(v, "rth_winding_housing"),
-                d(v, "rth_housing_ambient"), d(v, "tau_winding"), d(v, "tau_housing"), d(v, "max_winding_temp"),
-                d(v, "brush_drop"), d(v, "mass"), d(v, "price"));
-    }
-
-    /** The catalog's issues by field, first message per field. */
-    static Map<String, String> issues(List<PartRules.FieldIssue> issues) {
-        Map<String, String> out = new LinkedHashMap<>();
-        for (PartRules.FieldIssue i : issues) {
-            out.putIfAbsent(i.field(), i.message());
-        }
-        return out;
-    }
-
-    private static double d(Map<String, Object> v, String key) {
-        return (Double) v.get(key);
-    }
-
-    @Override
-    public String id(Motor part) {
-        return part.id();
-    }
-
-    @Override
-    public String label(Motor part) {
-        return part.label();
-    }
-
-    @Override
-    public List<Motor> parts(Catalog catalog) {
-        return catalog.motors();
+                number(v, "nominal_voltage"), number(v, "resistance"),
+                number(v, "resistance_temp"), number(v, "inductance"), number(v, "torque_constant"),
+                number(v, "no_load_current"), number(v, "continuous_current"), number(v, "peak_current"),
+                number(v, "max_speed"), number(v, "rotor_inertia"), number(v, "rth_winding_housing"),
+                number(v, "rth_housing_ambient"), number(v, "tau_winding"), number(v, "tau_housing"),
+                number(v, "max_winding_temp"), number(v, "brush_drop"), number(v, "mass"), number(v, "price"));
     }
 
     @Override

@@ -1,6 +1,5 @@
 package dev.yoke.tui.edit;
 
-import com.googlecode.lanterna.gui2.BasicWindow;
 import com.googlecode.lanterna.gui2.Direction;
 import com.googlecode.lanterna.gui2.Label;
 import com.googlecode.lanterna.gui2.LinearLayout;
@@ -8,7 +7,6 @@ import com.googlecode.lanterna.gui2.Panel;
 import com.googlecode.lanterna.gui2.Window;
 import com.googlecode.lanterna.gui2.WindowBasedTextGUI;
 import com.googlecode.lanterna.input.KeyStroke;
-import com.googlecode.lanterna.input.KeyType;
 
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -23,7 +21,7 @@ import java.util.Set;
  * F2 saves when every field is valid and otherwise says why not; Esc goes back, asking first
  * when something was changed. A new part also has a {@code file} field choosing where it goes.
  */
-final class PartForm extends BasicWindow {
+final class PartForm extends EditorWindow {
 
     private static final String FILE = "file";
     private static final String KEYS =
@@ -39,8 +37,6 @@ final class PartForm extends BasicWindow {
     private final Label title = new Label("");
     private final Label status = new Label("");
     private final Label state = new Label("");
-    private String message = "";
-    private boolean unicode = true;
 
     private PartForm(WindowBasedTextGUI gui, PartsEditor editor, EditablePart<Object> kind, Map<String, Object> values,
                      String replacedId, List<Path> files, Set<String> takenIds) {
@@ -107,7 +103,8 @@ final class PartForm extends BasicWindow {
         return form;
     }
 
-    private void refresh() {
+    @Override
+    void refresh() {
         String what = replacedId == null ? "NEW " + kind.noun().toUpperCase()
                 : "EDIT " + kind.noun().toUpperCase() + " " + replacedId;
         show(title, what + (replacedId == null ? "" : "   file " + files.get(0)));
@@ -153,20 +150,7 @@ final class PartForm extends BasicWindow {
 
     @Override
     public boolean handleInput(KeyStroke key) {
-        message = "";
-        boolean handled = super.handleInput(key);
-        if (!handled) {
-            if (key.getKeyType() == KeyType.F2) {
-                save();
-                return true;
-            }
-            if (key.getKeyType() == KeyType.Escape) {
-                back();
-                return true;
-            }
-        }
-        refresh();
-        return handled;
+        return saveOrLeave(key, this::save, this::back);
     }
 
     private void back() {
@@ -180,18 +164,14 @@ final class PartForm extends BasicWindow {
         ChoiceWindow.ask(gui, "Unsaved " + kind.noun(), "Discard the changes to this " + kind.noun() + "?", answers, unicode);
     }
 
-    /**
-     * Whether the terminal shows Unicode; when not, unit symbols and marks are spelt in ASCII
-     * ({@code Ohm}, {@code degC}, {@code N*m}) so nothing prints as '?'.
-     */
+    /** Whether the terminal shows Unicode (else symbols are spelt in ASCII); returns this window. */
     public PartForm useUnicode(boolean on) {
-        this.unicode = on;
-        form.setUnicode(on);
-        refresh();
+        setUnicode(on);
         return this;
     }
 
-    private void show(Label label, String text) {
-        label.setText(AsciiText.of(text, unicode));
+    @Override
+    void unicodeChanged(boolean on) {
+        form.setUnicode(on);
     }
 }

@@ -1,6 +1,5 @@
 package dev.yoke.tui.edit;
 
-import com.googlecode.lanterna.gui2.BasicWindow;
 import com.googlecode.lanterna.gui2.Direction;
 import com.googlecode.lanterna.gui2.Label;
 import com.googlecode.lanterna.gui2.LinearLayout;
@@ -34,7 +33,7 @@ import java.util.function.Consumer;
  * (typing narrows the list at once, Enter keeps the filter, Esc clears it); Enter or {@code e}
  * edits; {@code a} adds; {@code c} copies; {@code d} or Delete deletes after a question; Esc closes.
  */
-public final class PartsEditor extends BasicWindow {
+public final class PartsEditor extends EditorWindow {
 
     private static final String LIST_KEYS =
             "Tab motors/switches  / filter  Enter edit  a add  c copy  d delete  Esc close";
@@ -52,8 +51,6 @@ public final class PartsEditor extends BasicWindow {
     private boolean filtering;
     private int selected;
     private List<Object> shown = List.of();
-    private String message = "";
-    private boolean unicode = true;
 
     private PartsEditor(WindowBasedTextGUI gui, PartStore store, Runnable onSaved) {
         super("Parts");
@@ -104,7 +101,8 @@ public final class PartsEditor extends BasicWindow {
         return kind.plural();
     }
 
-    private void refresh() {
+    @Override
+    void refresh() {
         List<Object> all = kind.parts(store.catalog());
         String needle = filter.toLowerCase(Locale.ROOT);
         List<Object> out = new ArrayList<>();
@@ -397,18 +395,14 @@ public final class PartsEditor extends BasicWindow {
         return "deletion of " + kind.noun() + " " + ((PartChange.Remove) change).id();
     }
 
-    /**
-     * Whether the terminal shows Unicode; when not, unit symbols and marks are spelt in ASCII
-     * ({@code Ohm}, {@code degC}, {@code N*m}) so nothing prints as '?'.
-     */
+    /** Whether the terminal shows Unicode (else symbols are spelt in ASCII); returns this window. */
     public PartsEditor useUnicode(boolean on) {
-        this.unicode = on;
-        list.setUnicode(on);
-        refresh();
+        setUnicode(on);
         return this;
     }
 
-    private void show(Label label, String text) {
-        label.setText(AsciiText.of(text, unicode));
+    @Override
+    void unicodeChanged(boolean on) {
+        list.setUnicode(on);
     }
 }

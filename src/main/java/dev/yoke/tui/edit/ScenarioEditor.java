@@ -1,7 +1,6 @@
 package dev.yoke.tui.edit;
 
 import com.googlecode.lanterna.TerminalSize;
-import com.googlecode.lanterna.gui2.BasicWindow;
 import com.googlecode.lanterna.gui2.Direction;
 import com.googlecode.lanterna.gui2.Label;
 import com.googlecode.lanterna.gui2.LinearLayout;
@@ -9,7 +8,6 @@ import com.googlecode.lanterna.gui2.Panel;
 import com.googlecode.lanterna.gui2.Window;
 import com.googlecode.lanterna.gui2.WindowBasedTextGUI;
 import com.googlecode.lanterna.input.KeyStroke;
-import com.googlecode.lanterna.input.KeyType;
 import dev.yoke.catalog.ChangedOnDiskException;
 import dev.yoke.catalog.InputException;
 import dev.yoke.catalog.ScenarioLoader;
@@ -36,7 +34,7 @@ import java.util.function.Consumer;
  * its field and passed nowhere. F2 writes the file (atomically, keeping a backup); Esc closes,
  * asking first when the file is behind the screen.
  */
-public final class ScenarioEditor extends BasicWindow {
+public final class ScenarioEditor extends EditorWindow {
 
     private static final String FORM_KEYS =
             "Up/Down field  type to edit  Space choice  Tab segments  F2 save file  Esc close";
@@ -58,8 +56,6 @@ public final class ScenarioEditor extends BasicWindow {
     private final Label keys = new Label("");
     private Scenario passedOn;
     private Scenario saved;
-    private String message = "";
-    private boolean unicode = true;
 
     private ScenarioEditor(WindowBasedTextGUI gui, Scenario scenario, Path file, Consumer<Scenario> onChange,
                            ScenarioSaver saver) {
@@ -216,7 +212,8 @@ public final class ScenarioEditor extends BasicWindow {
         return (p.size() == 1 ? "1 problem: " : p.size() + " problems: ") + String.join(", ", where);
     }
 
-    private void refresh() {
+    @Override
+    void refresh() {
         String name = form.text(ScenarioFields.NAME);
         show(title, "SCENARIO " + name + "   file " + (file == null ? "(none)" : file.toString()));
         double cycle = 0;
@@ -244,20 +241,7 @@ public final class ScenarioEditor extends BasicWindow {
 
     @Override
     public boolean handleInput(KeyStroke key) {
-        message = "";
-        boolean handled = super.handleInput(key);
-        if (!handled) {
-            if (key.getKeyType() == KeyType.F2) {
-                save();
-                return true;
-            }
-            if (key.getKeyType() == KeyType.Escape) {
-                closeAsking();
-                return true;
-            }
-        }
-        refresh();
-        return handled;
+        return saveOrLeave(key, this::save, this::closeAsking);
     }
 
     private void closeAsking() {
@@ -280,18 +264,14 @@ public final class ScenarioEditor extends BasicWindow {
                         : "Some values are invalid and the file is older than the screen.", answers, unicode);
     }
 
-    /**
-     * Whether the terminal shows Unicode; when not, unit symbols and marks are spelt in ASCII
-     * ({@code Ohm}, {@code degC}, {@code N*m}) so nothing prints as '?'.
-     */
+    /** Whether the terminal shows Unicode (else symbols are spelt in ASCII); returns this window. */
     public ScenarioEditor useUnicode(boolean on) {
-        this.unicode = on;
-        form.setUnicode(on);
-        refresh();
+        setUnicode(on);
         return this;
     }
 
-    private void show(Label label, String text) {
-        label.setText(AsciiText.of(text, unicode));
+    @Override
+    void unicodeChanged(boolean on) {
+        form.setUnicode(on);
     }
 }

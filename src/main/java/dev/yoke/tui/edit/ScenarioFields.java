@@ -65,14 +65,14 @@ final class ScenarioFields {
     static List<FormRule> rules() {
         List<String> keys = fields().stream().map(FormField::key).toList();
         return List.of(FormRule.onRecord(keys, ScenarioFields::bench,
-                b -> MotorEditing.issues(PartRules.benchErrors(b))));
+                b -> PartEditing.issues(PartRules.benchErrors(b))));
     }
 
     /** The loader's plausibility doubts about the bench: shown with {@code ?}, never blocking. */
     static List<FormRule> doubts() {
         List<String> keys = fields().stream().map(FormField::key).toList();
         return List.of(FormRule.onRecord(keys, ScenarioFields::bench,
-                b -> MotorEditing.issues(Plausibility.benchWarnings(b))));
+                b -> PartEditing.issues(Plausibility.benchWarnings(b))));
     }
 
     static void fill(FieldForm form, Scenario s) {

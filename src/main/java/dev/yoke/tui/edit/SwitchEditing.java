@@ -1,6 +1,5 @@
 package dev.yoke.tui.edit;
 
-import dev.yoke.catalog.PartFields;
 import dev.yoke.catalog.PartKind;
 import dev.yoke.catalog.PartRules;
 import dev.yoke.catalog.Plausibility;
@@ -12,49 +11,18 @@ import dev.yoke.units.Units;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
 
 /** Switches (MOSFETs) in the parts editor: every {@link PowerSwitch} field with its unit and range. */
-public final class SwitchEditing implements EditablePart<PowerSwitch> {
+public final class SwitchEditing extends PartEditing<PowerSwitch> {
 
     /** The one instance. */
     public static final SwitchEditing INSTANCE = new SwitchEditing();
 
-    private static final List<FormField> FIELDS = PartFields.of(PartKind.SWITCH).stream()
-            .map(FormField::of)
-            .toList();
-
-    private static final List<FormRule> RULES = List.of(FormRule.onRecord(
-            FIELDS.stream().map(FormField::key).toList(),
-            INSTANCE::build,
-            s -> MotorEditing.issues(PartRules.switchErrors(s))));
-
     private SwitchEditing() {
-    }
-
-    @Override
-    public String noun() {
-        return "switch";
-    }
-
-    @Override
-    public String plural() {
-        return "switches";
-    }
-
-    @Override
-    public List<FormField> fields() {
-        return FIELDS;
-    }
-
-    @Override
-    public List<FormRule> rules() {
-        return RULES;
-    }
-
-    @Override
-    public List<FormRule> doubts() {
-        return List.of(FormRule.onRecord(FIELDS.stream().map(FormField::key).toList(), INSTANCE::build,
-                s -> MotorEditing.issues(Plausibility.switchWarnings(s))));
+        super("switch", "switches", PartKind.SWITCH, Set.of(),
+                PartRules::switchErrors, Plausibility::switchWarnings,
+                PowerSwitch::id, PowerSwitch::label, Catalog::switches);
     }
 
     @Override
@@ -86,30 +54,11 @@ public final class SwitchEditing implements EditablePart<PowerSwitch> {
     @Override
     public PowerSwitch build(Map<String, Object> v) {
         return new PowerSwitch((String) v.get("id"), (String) v.get("label"), (String) v.get("package"),
-                d(v, "vds_max"), d(v, "id_continuous"), d(v, "id_pulsed"), d(v, "rds_on"), d(v, "rds_on_hot"),
-                d(v, "rds_on_hot_temp"), d(v, "qg"), d(v, "qgs"),
-                d(v, "qgd"), d(v, "plateau_voltage"), d(v, "gate_resistance_internal"),
-                d(v, "coss"), d(v, "diode_vf"), d(v, "qrr"),
-                d(v, "rth_jc"), d(v, "tj_max"), d(v, "price"));
-    }
-
-    private static double d(Map<String, Object> v, String key) {
-        return (Double) v.get(key);
-    }
-
-    @Override
-    public String id(PowerSwitch part) {
-        return part.id();
-    }
-
-    @Override
-    public String label(PowerSwitch part) {
-        return part.label();
-    }
-
-    @Override
-    public List<PowerSwitch> parts(Catalog catalog) {
-        return catalog.switches();
+                number(v, "vds_max"),
+                number(v, "id_continuous"), number(v, "id_pulsed"), number(v, "rds_on"), number(v, "rds_on_hot"),
+                number(v, "rds_on_hot_temp"), number(v, "qg"), number(v, "qgs"), number(v, "qgd"),
+                number(v, "plateau_voltage"), number(v, "gate_resistance_internal"), number(v, "coss"),
+                number(v, "diode_vf"), number(v, "qrr"), number(v, "rth_jc"), number(v, "tj_max"), number(v, "price"));
     }
 
     @Override

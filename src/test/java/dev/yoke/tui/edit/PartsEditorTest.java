@@ -173,13 +173,18 @@ class PartsEditorTest {
         }
     }
 
+    /** Opens the editor, renames the first motor to {@code renamed} in its form and presses F2. */
+    private void renameFirstMotorAndSave(TerminalDriver t, MemoryPartStore store) {
+        open(t, store);
+        t.press(KeyType.Enter).press(KeyType.ArrowDown).clearField(30).type("renamed").press(KeyType.F2);
+    }
+
     @Test
     void fileChangedOnDiskOffersReloadThenWritesTheEdit() throws Exception {
         MemoryPartStore store = store();
         store.changedOnDisk = MOTORS;
         try (TerminalDriver t = new TerminalDriver(100, 30)) {
-            open(t, store);
-            t.press(KeyType.Enter).press(KeyType.ArrowDown).clearField(30).type("renamed").press(KeyType.F2);
+            renameFirstMotorAndSave(t, store);
             assertTrue(t.text().contains("changed by someone else"), t.text());
             assertTrue(store.applied.isEmpty());
             t.press(KeyType.Enter); // Reload, then apply mine
@@ -194,8 +199,7 @@ class PartsEditorTest {
         MemoryPartStore store = store();
         store.changedOnDisk = MOTORS;
         try (TerminalDriver t = new TerminalDriver(100, 30)) {
-            open(t, store);
-            t.press(KeyType.Enter).press(KeyType.ArrowDown).clearField(30).type("renamed").press(KeyType.F2);
+            renameFirstMotorAndSave(t, store);
             t.press(KeyType.ArrowRight).press(KeyType.Enter); // Keep both
             assertTrue(store.applied.isEmpty(), "the changed file is left alone");
             assertEquals(1, store.besides.size());
