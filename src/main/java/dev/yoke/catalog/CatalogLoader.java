@@ -13,6 +13,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
+import java.util.function.Function;
 import java.util.stream.Stream;
 
 /**
@@ -80,24 +81,8 @@ public final class CatalogLoader {
             if (reader == null) {
                 continue;
             }
-            for (CatalogReader.Located<Motor> m : reader.motors) {
-                if (unique(path, m, m.part().id(), "motor", motorOrigins, problems)) {
-                    motors.add(m.part());
-                    motorOrigins.put(m.part().id(), new Origin(path, m.line()));
-                    if (m.implausible()) {
-                        implausible.add(m.part().id());
-                    }
-                }
-            }
-            for (CatalogReader.Located<PowerSwitch> s : reader.switches) {
-                if (unique(path, s, s.part().id(), "switch", switchOrigins, problems)) {
-                    switches.add(s.part());
-                    switchOrigins.put(s.part().id(), new Origin(path, s.line()));
-                    if (s.implausible()) {
-                        implausible.add(s.part().id());
-                    }
-                }
-            }
+            take(path, reader.motors, Motor::id, "motor", motors, motorOrigins, implausible, problems);
+            take(path, reader.switches, PowerSwitch::id, "switch", switches, switchOrigins, implausible, problems);
         }
         if (problems.stream().anyMatch(p -> !p.warning())) {
             throw new InputException(problems);
@@ -123,6 +108,21 @@ public final class CatalogLoader {
         CatalogReader reader = new CatalogReader(new SectionReader(path, problems));
         reader.read(root);
         return new FileResult(source.identity(), reader, problems);
+    }
+
+    /** Adds the parts of one file whose ids are new, noting where each is defined and which are doubtful. */
+    private static <T> void take(Path path, List<CatalogReader.Located<T>> found, Function<T, String> idOf,
+            String noun, List<T> parts, Map<String, Origin> origins, Set<String> implausible, List<Problem> problems) {
+        for (CatalogReader.Located<T> located : found) {
+            String id = idOf.apply(located.part());
+            if (unique(path, located, id, noun, origins, problems)) {
+                parts.add(located.part());
+                origins.put(id, new Origin(path, located.line()));
+                if (located.implausible()) {
+                    implausible.add(id);
+                }
+            }
+        }
     }
 
     private static boolean unique(Path path, CatalogReader.Located<?> part, String id, String noun,

@@ -8,13 +8,10 @@ import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.security.MessageDigest;
-import java.security.NoSuchAlgorithmException;
 import java.time.Duration;
 import java.time.Instant;
 import java.time.temporal.ChronoUnit;
 import java.util.ArrayList;
-import java.util.HexFormat;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -361,15 +358,7 @@ public final class CatalogStore {
         if (stamp == null) {
             throw new ChangedOnDiskException(file); // appeared since the load
         }
-        byte[] bytes;
-        try {
-            bytes = Files.readAllBytes(file);
-        } catch (java.nio.file.NoSuchFileException e) {
-            throw new ChangedOnDiskException(file); // deleted since the load
-        }
-        if (bytes.length != stamp.size() || !sha256(bytes).equalsIgnoreCase(stamp.sha256())) {
-            throw new ChangedOnDiskException(file);
-        }
+        byte[] bytes = stamp.readUnchanged(file);
         String text = new String(bytes, StandardCharsets.UTF_8);
         return text.startsWith("\uFEFF") ? text.substring(1) : text;
     }
@@ -381,14 +370,6 @@ public final class CatalogStore {
             }
         }
         return null;
-    }
-
-    static String sha256(byte[] bytes) {
-        try {
-            return HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(bytes));
-        } catch (NoSuchAlgorithmException e) {
-            throw new IllegalStateException("every Java runtime has SHA-256", e);
-        }
     }
 
     /** A target file given by the editor: a {@code .yaml} file directly in the catalog folder. */

@@ -98,6 +98,28 @@ public record FieldSpec(PartKind part, String key, FieldType type, Dimension dim
         return type == FieldType.QUANTITY || type == FieldType.QUANTITY_LIST;
     }
 
+    /**
+     * {@code value} as the YAML scalar a save writes for this key: numbers through
+     * {@link Units#formatExact} (they load back as the very same double) with the key's unit, lists
+     * of numbers in brackets, booleans bare, anything else as text quoted only where YAML needs it.
+     */
+    String scalar(Object value) {
+        if (value instanceof Double number) {
+            return Units.formatExact(number, dimension);
+        }
+        if (value instanceof List<?> list) {
+            StringBuilder out = new StringBuilder("[");
+            for (Object item : list) {
+                out.append(out.length() > 1 ? ", " : "").append(Units.formatExact((Double) item, dimension));
+            }
+            return out.append(']').toString();
+        }
+        if (value instanceof Boolean bool) {
+            return bool.toString();
+        }
+        return CatalogText.scalar(String.valueOf(value));
+    }
+
     /** The unit in words for documentation: "ohms (Ω, Ohm)", or the type for non-quantities. */
     public String unitText() {
         return switch (type) {

@@ -204,9 +204,6 @@ final class PartText<T> {
 
     private FieldValue field(Binding<T> binding, Object value) {
         FieldSpec spec = binding.spec();
-        String scalar = value instanceof Double number
-                ? Units.formatExact(number, spec.dimension())
-                : CatalogText.scalar(String.valueOf(value));
-        return new FieldValue(spec.key(), binding.acceptedKeys(), scalar);
+        return new FieldValue(spec.key(), binding.acceptedKeys(), spec.scalar(value));
     }
 }

@@ -9,13 +9,10 @@ import dev.yoke.units.Units;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
-import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
-import java.util.function.Function;
-import java.util.stream.Collectors;
 
 /**
  * Saves a scenario file: the whole file is written anew from the scenario (a scenario is small
@@ -55,15 +52,7 @@ public final class ScenarioStore {
      */
     public static LoadedScenario save(Scenario scenario, Path file, CatalogFile loadedAs)
             throws IOException, InputException, ChangedOnDiskException {
-        byte[] now;
-        try {
-            now = Files.readAllBytes(file);
-        } catch (NoSuchFileException e) {
-            throw new ChangedOnDiskException(file);
-        }
-        if (now.length != loadedAs.size() || !CatalogStore.sha256(now).equalsIgnoreCase(loadedAs.sha256())) {
-            throw new ChangedOnDiskException(file);
-        }
+        byte[] now = loadedAs.readUnchanged(file);
         return write(scenario, file, headerOf(new String(now, StandardCharsets.UTF_8)));
     }
 
@@ -194,22 +183,8 @@ public final class ScenarioStore {
             if (value == null || value instanceof String text && text.isEmpty()) {
                 continue;
             }
-            line(out, depth, spec.key(), scalar(spec, value));
+            line(out, depth, spec.key(), spec.scalar(value));
         }
-    }
-
-    private static String scalar(FieldSpec spec, Object value) {
-        Function<Double, String> number = v -> Units.formatExact(v, spec.dimension());
-        if (value instanceof Double v) {
-            return number.apply(v);
-        }
-        if (value instanceof List<?> list) {
-            return list.stream().map(v -> number.apply((Double) v)).collect(Collectors.joining(", ", "[", "]"));
-        }
-        if (value instanceof Boolean b) {
-            return b.toString();
-        }
-        return CatalogText.scalar(value.toString());
     }
 
     private static void line(StringBuilder out, int depth, String key, String scalar) {

@@ -5,9 +5,6 @@ import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.nio.file.attribute.FileTime;
-import java.security.MessageDigest;
-import java.security.NoSuchAlgorithmException;
-import java.util.HexFormat;
 import java.util.List;
 
 /** The bytes of a user's file and its identity (digest, size, time), or a problem saying why not. */
@@ -31,21 +28,12 @@ record SourceFile(byte[] bytes, CatalogFile identity) {
                 problems.add(Problem.error(path, 0, 0, "", YamlReader.tooLarge(bytes.length)));
                 return null;
             }
-            return new SourceFile(bytes, new CatalogFile(path, sha256(bytes), bytes.length, modified));
+            return new SourceFile(bytes, new CatalogFile(path, CatalogFile.sha256(bytes), bytes.length, modified));
         } catch (NoSuchFileException e) {
             problems.add(Problem.error(path, 0, 0, "", "no such file"));
         } catch (IOException | SecurityException e) {
             problems.add(Problem.error(path, 0, 0, "", "cannot be read: " + e.getMessage()));
         }
         return null;
-    }
-
-    /** Hex SHA-256 of {@code bytes} (FIPS 180-4). */
-    static String sha256(byte[] bytes) {
-        try {
-            return HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(bytes));
-        } catch (NoSuchAlgorithmException e) {
-            throw new IllegalStateException("every Java runtime has SHA-256", e);
-        }
     }
 }

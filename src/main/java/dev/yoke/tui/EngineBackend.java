@@ -1,5 +1,6 @@
 package dev.yoke.tui;
 
+import dev.yoke.catalog.CatalogFile;
 import dev.yoke.engine.DriveEvaluator;
 import dev.yoke.engine.RowFilter;
 import dev.yoke.engine.Shortlist;
@@ -11,13 +12,9 @@ import dev.yoke.model.Scenario;
 import dev.yoke.report.Meta;
 import dev.yoke.report.ShortlistCsvWriter;
 import java.io.IOException;
-import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.security.MessageDigest;
-import java.security.NoSuchAlgorithmException;
 import java.time.Instant;
-import java.util.HexFormat;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -79,13 +76,7 @@ public final class EngineBackend implements WorkbenchBackend {
     /** A file as it is now: path as given, SHA-256 of its bytes, size and modification time. */
     static Meta.SourceFile sourceFile(Path path) throws IOException {
         byte[] bytes = Files.readAllBytes(path);
-        try {
-            String digest = HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(bytes));
-            return new Meta.SourceFile(path.toString(), digest, bytes.length,
-                    Files.getLastModifiedTime(path).toInstant());
-        } catch (NoSuchAlgorithmException e) {
-            // Every Java platform must provide SHA-256 (java.security.MessageDigest specification).
-            throw new UncheckedIOException(new IOException(e));
-        }
+        return new Meta.SourceFile(path.toString(), CatalogFile.sha256(bytes), bytes.length,
+                Files.getLastModifiedTime(path).toInstant());
     }
 }

@@ -241,7 +241,7 @@ class LoaderEdgeCasesTest {
     @Test
     void fileDigestIsSha256() {
         assertEquals("ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad",
-                SourceFile.sha256("abc".getBytes(StandardCharsets.US_ASCII)));
+                CatalogFile.sha256("abc".getBytes(StandardCharsets.US_ASCII)));
     }
 
     @Test
