@@ -79,8 +79,11 @@ class EnginePropertiesTest {
      * Law: a hotter surrounding never makes a junction or a winding cooler. It holds while the copper loss
      * rises with resistance; when L/R is short against the PWM period (rough current) the ripple is set by R
      * rather than L, and a hotter, more resistive winding carries less ripple current (loss ≈ V²/R falls), so
-     * those cases are set aside. So are junctions beyond 500 °C, close to the runaway pole of the closed form,
-     * where the same slight fall of ripple current in a hotter winding outweighs the ambient.
+     * those cases are set aside. So are junctions above the switch's own rated maximum: the R_DS(on) line is
+     * datasheet data only up to T_j,max, and beyond it, near the runaway pole of the closed form, the
+     * amplification 1/(1 − R_th·A·R25·α) turns the slight shift of the operating point in a hotter, more
+     * resistive winding (a different duty, so a different share of loss per switch) into kelvins
+     * (found by jqwik: 434.8 → 430.2 °C on a 175 °C part).
      */
     @Property(tries = 2000, maxDiscardRatio = 20)
     void higherAmbientNeverLowersATemperature(@ForAll long seed) {
@@ -94,7 +97,7 @@ class EnginePropertiesTest {
         double[] b = summarize(hot, m, q, 0, 0);
         Assume.that(!runaway(a) && !runaway(b));
         Assume.that(((int) a[Metric.ADVISORIES.ordinal()] & Advisory.ROUGH_CURRENT.bit()) == 0);
-        Assume.that(b[Metric.JUNCTION_TEMP_MAX.ordinal()] < 500);
+        Assume.that(b[Metric.JUNCTION_TEMP_MAX.ordinal()] <= q.maxJunctionTemp());
         assertTrue(b[Metric.JUNCTION_TEMP_MAX.ordinal()] >= a[Metric.JUNCTION_TEMP_MAX.ordinal()] - 1e-9,
                 "junction, seed " + seed);
         assertTrue(b[Metric.WINDING_TEMP_MAX.ordinal()] >= a[Metric.WINDING_TEMP_MAX.ordinal()] - 1e-9,
