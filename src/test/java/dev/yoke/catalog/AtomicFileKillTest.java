@@ -54,7 +54,8 @@ class AtomicFileKillTest {
             Path catalog = Files.createDirectories(folder.resolve("catalog-" + lane));
             lanes.add(new Lane(catalog.resolve("motors.yaml"), fileA, fileB, lane == 1, new Random(42L + lane)));
         }
-        int[] counts = new int[5]; // kills, found A, found B, kills that left a temporary file behind, kills of the streaming lane
+        // kills, found A, found B, kills that left a temporary file behind, kills of the streaming lane, of which mid-save
+        int[] counts = new int[6];
         for (int round = 0; round * LANES < KILLS; round++) {
             List<Process> running = new ArrayList<>();
             for (Lane lane : lanes) {
@@ -78,13 +79,15 @@ class AtomicFileKillTest {
                 }
                 counts[0]++;
                 counts[isA ? 1 : 2]++;
-                counts[3] += lane.newTemps();
+                int midSave = lane.newTemps();
+                counts[3] += midSave;
                 counts[4] += lane.streamed ? 1 : 0;
+                counts[5] += lane.streamed ? midSave : 0;
             }
         }
         System.out.printf("atomic save: %d kills survived (%d of them streaming; file found as old version %d times,"
-                + " new %d times, %d kills landed mid-save and left a temporary file)%n",
-                counts[0], counts[4], counts[1], counts[2], counts[3]);
+                + " new %d times, %d kills landed mid-save and left a temporary file, %d of them streaming)%n",
+                counts[0], counts[4], counts[1], counts[2], counts[3], counts[5]);
         assertEquals(0, counts[0] % LANES);
         assertTrue(counts[0] >= KILLS);
     }
