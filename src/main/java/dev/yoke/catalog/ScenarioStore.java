@@ -81,8 +81,7 @@ public final class ScenarioStore {
             return render(scenario, NEW_FILE_HEADER);
         }
         byte[] bytes = loadedAs != null ? loadedAs.readUnchanged(file) : Files.readAllBytes(file);
-        String text = new String(bytes, StandardCharsets.UTF_8);
-        text = text.startsWith("\uFEFF") ? text.substring(1) : text;
+        String text = SourceFile.textOf(bytes);
         LoadedScenario before;
         try {
             before = ScenarioLoader.load(file);
@@ -123,11 +122,10 @@ public final class ScenarioStore {
         return out.toString();
     }
 
-    /** The comment block at the top of a scenario file: leading comment and blank lines. */
+    /** The comment block at the top of a scenario file's text: leading comment and blank lines. */
     static String headerOf(String text) {
-        String body = text.startsWith("\uFEFF") ? text.substring(1) : text;
         StringBuilder header = new StringBuilder();
-        for (String line : body.split("\n", -1)) {
+        for (String line : text.split("\n", -1)) {
             String stripped = line.strip();
             if (!stripped.isEmpty() && !stripped.startsWith("#")) {
                 break;
