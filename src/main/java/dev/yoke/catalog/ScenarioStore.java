@@ -40,7 +40,7 @@ public final class ScenarioStore {
      * @throws IOException    the disk failed, or the save did not verify ({@link SaveNotVerifiedException})
      */
     public static LoadedScenario save(Scenario scenario, Path file) throws IOException, InputException {
-        String header = Files.exists(file) ? headerOf(Files.readString(file, StandardCharsets.UTF_8)) : NEW_FILE_HEADER;
+        String header = Files.exists(file) ? headerOf(SourceFile.textOf(Files.readAllBytes(file))) : NEW_FILE_HEADER;
         return write(scenario, file, header);
     }
 
@@ -53,7 +53,7 @@ public final class ScenarioStore {
     public static LoadedScenario save(Scenario scenario, Path file, CatalogFile loadedAs)
             throws IOException, InputException, ChangedOnDiskException {
         byte[] now = loadedAs.readUnchanged(file);
-        return write(scenario, file, headerOf(new String(now, StandardCharsets.UTF_8)));
+        return write(scenario, file, headerOf(SourceFile.textOf(now)));
     }
 
     /** The text Yoke writes for {@code scenario} under {@code header} (comment lines, may be empty). */
@@ -100,11 +100,10 @@ public final class ScenarioStore {
         return out.toString();
     }
 
-    /** The comment block at the top of a scenario file: leading comment and blank lines. */
+    /** The comment block at the top of a scenario file's text: leading comment and blank lines. */
     static String headerOf(String text) {
-        String body = text.startsWith("\uFEFF") ? text.substring(1) : text;
         StringBuilder header = new StringBuilder();
-        for (String line : body.split("\n", -1)) {
+        for (String line : text.split("\n", -1)) {
             String stripped = line.strip();
             if (!stripped.isEmpty() && !stripped.startsWith("#")) {
                 break;

@@ -1,8 +1,8 @@
 package dev.yoke.engine;
 
 /**
- * Every limit a pairing is judged against. Each gives a signed margin
- * (limit − value)/limit: negative means violated, and the smallest margin binds.
+ * Every limit a pairing is judged against. Each yields the margin (limit − value)/limit, with
+ * its sign: below zero the limit is broken, and the smallest margin is the binding one.
  */
 public enum Constraint {
     /** Derated V_DS rating against the highest bus voltage. */

@@ -4,10 +4,10 @@ package dev.yoke.model;
  * A permanent-magnet brushed DC motor as the catalog describes it, in SI units
  * (temperatures in °C, names ending in {@code Temp}).
  *
- * <p>The torque constant k_t in N·m/A equals the back-EMF constant k_e in V·s/rad
- * in SI units (any electric-machines text, e.g. Hughes &amp; Drury, <i>Electric
+ * <p>In SI units the torque constant k_t (N·m/A) and the back-EMF constant k_e (V·s/rad)
+ * are the same number (any electric-machines text, e.g. Hughes &amp; Drury, <i>Electric
  * Motors and Drives</i>, 4th ed., ch. 3), so only k_t is kept; the loader converts
- * k_e or a speed constant in rpm/V.
+ * a back-EMF constant or an rpm-per-volt speed constant.
  *
  * @param id                  unique key across the catalog
  * @param label               free text shown beside the id

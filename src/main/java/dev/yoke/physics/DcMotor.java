@@ -37,7 +37,7 @@ public final class DcMotor {
     /**
      * Motor shaft torque for a load seen through a gearbox (common practice, e.g. Hughes &amp; Drury ch. 11):
      * the load torque reflected as T_load/(N·η) when the motor drives the load and T_load·η/N when
-     * the load drives back, plus the acceleration of the motor and the reflected load inertia
+     * the load overhauls the motor, plus the acceleration of the motor and the reflected load inertia
      * (J_motor + J_load/N²)·α_motor, plus friction T_f·sign(ω).
      *
      * @param loadTorque     load torque, N·m (positive opposes positive speed)

@@ -2,7 +2,7 @@ package dev.yoke.physics;
 
 /**
  * Exact periodic steady-state current of a series R-L load (a motor winding, with its back-EMF)
- * fed a rectangular voltage of swing ΔV, on-fraction δ and period T_p.
+ * driven by a two-level voltage that steps by ΔV and stays high for a fraction δ of each period T_p.
  *
  * <p>With τ = L/R each interval is a first-order exponential toward its own asymptote; matching the
  * ends of the two intervals gives the peak-to-peak ripple

@@ -2,7 +2,7 @@ package dev.yoke.physics;
 
 /**
  * Loss mechanisms of a MOSFET in a hard-switched leg, as averages in watts at switching frequency f
- * (Mohan, Undeland &amp; Robbins, <i>Power Electronics</i>, 3rd ed., §2-7, eq. 2-6 for the linear V·I
+ * (Mohan, Undeland &amp; Robbins, <i>Power Electronics</i>, 3rd ed., ch. 2, eq. 2-6, from memory, for the linear V·I
  * overlap; Erickson &amp; Maksimović, ch. 4, for capacitive and recovery loss; gate charge for drive loss).
  */
 public final class SwitchLossLaws {

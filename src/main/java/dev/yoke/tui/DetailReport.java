@@ -192,7 +192,7 @@ public final class DetailReport {
                     .build());
         }
         out.add(Line.blank());
-        out.add(Line.of(Tone.DIM, "Estimates for shortlisting: measure the built drive (press c for the cautions)."));
+        out.add(Line.of(Tone.DIM, "Screening estimates: measure the built drive (press c for the cautions)."));
         return out;
     }
 

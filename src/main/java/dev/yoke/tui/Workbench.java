@@ -547,7 +547,7 @@ public final class Workbench implements ScreenLoop {
         addWrapped(lines, "  " + g.descending() + " " + g.ascending() + " " + g.descending() + "2   sort direction on a heading; 2 marks the second key", width);
         lines.add(Line.of("  m:...    margin columns, (limit - value) / limit: negative fails"));
         lines.add(Line.blank());
-        lines.add(Line.of(Tone.WARN, "Results are estimates for shortlisting; press c for the safety cautions."));
+        lines.add(Line.of(Tone.WARN, "Screening estimates only; press c for the safety cautions."));
         return lines;
     }
 

@@ -68,7 +68,7 @@ class WorkbenchInTmuxIT {
                 () -> assertTrue(detail.lines().anyMatch(l -> l.strip().startsWith("\u25B6") && l.strip().endsWith("binding")),
                         "the binding margin is marked: " + detail),
                 () -> assertTrue(read("05-help.txt").contains("Help: keys"), read("05-help.txt")),
-                () -> assertTrue(read("06-cautions.txt").contains("not a substitute for measuring the built drive")),
+                () -> assertTrue(read("06-cautions.txt").contains("licensed electrician")),
                 () -> assertTrue(read("07-after-quit.txt").contains("YOKE-EXIT=0"), read("07-after-quit.txt")));
 
         // A mistake in the scenario: printed after the screen closed, located, exit status 2, no stack trace.
