@@ -1,7 +1,10 @@
 package dev.yoke.catalog;
 
+import java.io.BufferedOutputStream;
+import java.io.FilterOutputStream;
 import java.io.IOException;
-import java.nio.ByteBuffer;
+import java.io.OutputStream;
+import java.nio.channels.Channels;
 import java.nio.channels.FileChannel;
 import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.DirectoryStream;
@@ -51,6 +54,9 @@ public final class AtomicFile {
 
     private static final Duration STALE_TEMP_AGE = Duration.ofHours(1);
 
+    /** Bytes buffered between the content and the temporary file. */
+    private static final int BUFFER_BYTES = 1 << 16;
+
     private static final SecureRandom RANDOM = new SecureRandom();
 
     private AtomicFile() {
@@ -59,6 +65,15 @@ public final class AtomicFile {
     /** The backup path kept beside {@code target}: {@code NAME.bak} in the same folder. */
     public static Path backupOf(Path target) {
         return target.resolveSibling(target.getFileName() + BACKUP_SUFFIX);
+    }
+
+    /**
+     * What a save writes: the new content, produced into the stream the save gives (a hidden
+     * temporary file, buffered). The stream need not be closed; closing it only flushes.
+     */
+    @FunctionalInterface
+    public interface Content {
+        void writeTo(OutputStream out) throws IOException;
     }
 
     /**
@@ -78,6 +93,25 @@ public final class AtomicFile {
      */
     public static void write(Path target, byte[] content, boolean keepBackup) throws IOException {
         Objects.requireNonNull(content, "content");
+        write(target, out -> out.write(content), keepBackup);
+    }
+
+    /**
+     * Streams {@code content} to {@code target} atomically, keeping the previous version as
+     * {@link #backupOf(Path) NAME.bak}: for content too large to hold in memory (an export of a
+     * million rows), written straight into the temporary file.
+     *
+     * @throws IOException when the folder is missing or not writable, the disk is full, or
+     *                     {@code content} fails; whatever fails (an unchecked exception or error of
+     *                     {@code content} too), the target is unchanged and no temporary file is left
+     */
+    public static void write(Path target, Content content) throws IOException {
+        write(target, content, true);
+    }
+
+    /** Like {@link #write(Path, Content)}; with {@code keepBackup} false the current backup is left as it is. */
+    public static void write(Path target, Content content, boolean keepBackup) throws IOException {
+        Objects.requireNonNull(content, "content");
         Path file = followLink(target.toAbsolutePath());
         Path folder = file.getParent();
         String name = file.getFileName().toString();
@@ -91,8 +125,8 @@ public final class AtomicFile {
                 keepBackup(file, folder, name);
             }
             moveAtomically(temp, file);
-        } catch (IOException | RuntimeException e) {
-            Files.deleteIfExists(temp);
+        } catch (Throwable e) {
+            deleteQuietly(temp, e);
             throw e;
         }
         forceFolder(folder);
@@ -105,8 +139,8 @@ public final class AtomicFile {
      */
     public static void restoreBackup(Path target) throws IOException {
         Path file = followLink(target.toAbsolutePath());
-        byte[] previous = Files.readAllBytes(backupOf(file));
-        write(file, previous, false);
+        Path backup = backupOf(file);
+        write(file, out -> Files.copy(backup, out), false);
     }
 
     private static void keepBackup(Path file, Path folder, String name) throws IOException {
@@ -117,8 +151,8 @@ public final class AtomicFile {
                 channel.force(true);
             }
             moveAtomically(backupTemp, backupOf(file));
-        } catch (IOException | RuntimeException e) {
-            Files.deleteIfExists(backupTemp);
+        } catch (Throwable e) {
+            deleteQuietly(backupTemp, e);
             throw e;
         }
     }
@@ -138,14 +172,33 @@ public final class AtomicFile {
         }
     }
 
-    private static void writeForced(Path temp, byte[] content) throws IOException {
+    /** Runs {@code content} into {@code temp} through a buffer, then forces the bytes to the device. */
+    private static void writeForced(Path temp, Content content) throws IOException {
         try (FileChannel channel = FileChannel.open(temp, StandardOpenOption.WRITE,
                 StandardOpenOption.TRUNCATE_EXISTING)) {
-            ByteBuffer buffer = ByteBuffer.wrap(content);
-            while (buffer.hasRemaining()) {
-                channel.write(buffer);
-            }
+            OutputStream buffered = new BufferedOutputStream(Channels.newOutputStream(channel), BUFFER_BYTES);
+            content.writeTo(new FilterOutputStream(buffered) {
+                @Override
+                public void write(byte[] bytes, int offset, int length) throws IOException {
+                    buffered.write(bytes, offset, length); // FilterOutputStream would go byte by byte
+                }
+
+                @Override
+                public void close() throws IOException {
+                    flush(); // the channel is ours to force and close
+                }
+            });
+            buffered.flush();
             channel.force(true);
+        }
+    }
+
+    /** Deletes a temporary after a failure; a failure to delete is added to {@code cause}, not thrown. */
+    private static void deleteQuietly(Path temp, Throwable cause) {
+        try {
+            Files.deleteIfExists(temp);
+        } catch (IOException | RuntimeException e) {
+            cause.addSuppressed(e);
         }
     }
 

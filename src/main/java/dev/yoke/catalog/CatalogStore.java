@@ -358,9 +358,7 @@ public final class CatalogStore {
         if (stamp == null) {
             throw new ChangedOnDiskException(file); // appeared since the load
         }
-        byte[] bytes = stamp.readUnchanged(file);
-        String text = new String(bytes, StandardCharsets.UTF_8);
-        return text.startsWith("\uFEFF") ? text.substring(1) : text;
+        return SourceFile.textOf(stamp.readUnchanged(file));
     }
 
     private CatalogFile stampOf(Path file) {

@@ -16,6 +16,7 @@ import org.yaml.snakeyaml.nodes.Node;
 import org.yaml.snakeyaml.nodes.NodeTuple;
 import org.yaml.snakeyaml.nodes.ScalarNode;
 import org.yaml.snakeyaml.nodes.SequenceNode;
+import org.yaml.snakeyaml.nodes.Tag;
 
 /**
  * Text-preserving edits of one catalog file: the user's comments, blank lines, key order and
@@ -28,6 +29,10 @@ import org.yaml.snakeyaml.nodes.SequenceNode;
  * part's lines are removed (comments between parts stay, as they may describe the list).
  * Lists written in flow style ({@code [ {...}, {...} ]}) are refused with a message rather than
  * rewritten, except the empty list {@code []}.
+ *
+ * <p>Besides parts found by id in a top-level list, the same edits reach a section by its path of
+ * keys and an item of a nested list by its index (what a scenario file holds), and a nested list can
+ * be rearranged, its items moving with their own lines.
  */
 final class CatalogText {
 
@@ -93,16 +98,39 @@ final class CatalogText {
         return text;
     }
 
-    /** The keys part {@code id} of list {@code listKey} spells out, in file order (empty when absent). */
+    /** The keys part {@code id} of list {@code listKey} gives a value, in file order (empty when absent). */
     List<String> keysOf(String listKey, String id) {
+        return item(listKey, id).map(CatalogText::keysIn).orElse(List.of());
+    }
+
+    /**
+     * The keys the section at {@code path} spells out, in file order. The path names the keys from
+     * the top level down ({@code ["bench", "limits"]}); an empty path is the top level itself.
+     *
+     * @throws IOException when a key on the path is missing or does not hold a section
+     */
+    List<String> keysAt(List<String> path) throws IOException {
+        return keysIn(section(path));
+    }
+
+    /**
+     * The keys item {@code index} (from 0) of the list at {@code listPath} spells out, in file order.
+     *
+     * @throws IOException when the list or the item is missing, or the item is not a section
+     */
+    List<String> keysOfItem(List<String> listPath, int index) throws IOException {
+        return keysIn(itemAt(listPath, index));
+    }
+
+    /** The keys that hold a value: {@code key:} with nothing after it reads as absent, as the loader reads it. */
+    private static List<String> keysIn(MappingNode mapping) {
         List<String> keys = new ArrayList<>();
-        item(listKey, id).ifPresent(item -> {
-            for (NodeTuple tuple : item.getValue()) {
-                if (tuple.getKeyNode() instanceof ScalarNode key) {
-                    keys.add(key.getValue());
-                }
+        for (NodeTuple tuple : mapping.getValue()) {
+            boolean empty = tuple.getValueNode() instanceof ScalarNode value && Tag.NULL.equals(value.getTag());
+            if (tuple.getKeyNode() instanceof ScalarNode key && !empty) {
+                keys.add(key.getValue());
             }
-        });
+        }
         return keys;
     }
 
@@ -118,8 +146,29 @@ final class CatalogText {
      */
     String withFields(String listKey, String id, List<FieldValue> fields) throws IOException {
         MappingNode item = item(listKey, id).orElseThrow(() -> missing(listKey, id));
+        return withFields(item, listKey + " '" + id + "'", fields);
+    }
+
+    /**
+     * The text with the given fields of the section at {@code path} (see {@link #keysAt}) set,
+     * like {@link #withFields(String, String, List)} does for a part.
+     */
+    String withSectionFields(List<String> path, List<FieldValue> fields) throws IOException {
+        return withFields(section(path), path.isEmpty() ? "the top level" : String.join(".", path), fields);
+    }
+
+    /**
+     * The text with the given fields of item {@code index} (from 0) of the list at
+     * {@code listPath} set, like {@link #withFields(String, String, List)} does for a part.
+     */
+    String withItemFields(List<String> listPath, int index, List<FieldValue> fields) throws IOException {
+        return withFields(itemAt(listPath, index), String.join(".", listPath) + " #" + (index + 1), fields);
+    }
+
+    /** Sets {@code fields} in {@code item} ({@code what} names it in messages). */
+    private String withFields(MappingNode item, String what, List<FieldValue> fields) throws IOException {
         if (item.getFlowStyle() == FlowStyle.FLOW) {
-            throw new IOException(listKey + " '" + id + "' is written in flow style {...};"
+            throw new IOException(what + " is written in flow style {...};"
                     + " write it as a block (one field per line) to edit it in Yoke");
         }
         List<Replacement> replacements = new ArrayList<>();
@@ -204,6 +253,97 @@ final class CatalogText {
         int at = nextLineStart(contentEnd(last));
         return apply(List.of(new Replacement(at, at, (endsWithNewline(at) ? "" : newline)
                 + block(dashIndent + "- ", keyIndent, fields))));
+    }
+
+    /**
+     * One item of a rearranged list: an item already in the file (by its index there), or a new
+     * one written from its fields.
+     *
+     * @param index  the item's index in the file, or -1 for a new item
+     * @param fields the new item's fields (empty for a kept one)
+     */
+    record ListEntry(int index, List<FieldValue> fields) {
+        ListEntry {
+            fields = List.copyOf(fields);
+        }
+
+        static ListEntry kept(int index) {
+            return new ListEntry(index, List.of());
+        }
+
+        static ListEntry added(List<FieldValue> fields) {
+            return new ListEntry(-1, fields);
+        }
+    }
+
+    /**
+     * The text with the block list at {@code listPath} holding {@code entries}, in that order: kept
+     * items move with their own lines, comments inside them included; an item of the file not named
+     * goes, with its lines; a new item is written in the style of the list (the indentation of its
+     * items, a blank line between items when every item is set apart by one). The lines between two
+     * items (comments, blank lines) belong to the item below them and move or go with it; comments
+     * above the first item and after the last stay where they are, as they describe the list.
+     *
+     * @throws IOException when the list is missing, empty or in flow style, or an index is out of range
+     */
+    String withItemsArranged(List<String> listPath, List<ListEntry> entries) throws IOException {
+        SequenceNode sequence = blockSequenceAt(listPath);
+        List<Node> items = sequence.getValue();
+        int count = items.size();
+        if (count == 0) {
+            throw new IOException(String.join(".", listPath) + " is an empty list");
+        }
+        int[] unitStart = new int[count];
+        int[] bodyStart = new int[count];
+        int[] unitEnd = new int[count];
+        boolean spaced = count > 1;
+        for (int i = 0; i < count; i++) {
+            bodyStart[i] = lineStart(dashBefore(charIndex(items.get(i).getStartMark())));
+            unitEnd[i] = nextLineStart(contentEnd(items.get(i)));
+            unitStart[i] = i == 0 ? bodyStart[0] : unitEnd[i - 1];
+            if (i > 0) {
+                spaced &= leadingBlankLines(text.substring(unitStart[i], bodyStart[i])) > 0;
+            }
+        }
+        Node last = items.get(count - 1);
+        String dashIndent = " ".repeat(column(dashBefore(charIndex(last.getStartMark()))));
+        String keyIndent = " ".repeat(column(charIndex(last.getStartMark())));
+        StringBuilder out = new StringBuilder();
+        for (ListEntry entry : entries) {
+            String lead;
+            String body;
+            if (entry.index() < 0) {
+                lead = "";
+                body = block(dashIndent + "- ", keyIndent, entry.fields());
+            } else if (entry.index() < count) {
+                lead = text.substring(unitStart[entry.index()], bodyStart[entry.index()]);
+                body = text.substring(bodyStart[entry.index()], unitEnd[entry.index()]);
+                body = body.endsWith("\n") ? body : body + newline;
+            } else {
+                throw new IOException(String.join(".", listPath) + " has no item #" + (entry.index() + 1));
+            }
+            if (out.length() == 0) {
+                lead = lead.substring(leadingBlankLines(lead)); // nothing to set the first item apart from
+            } else if (spaced && leadingBlankLines(lead) == 0) {
+                lead = newline + lead;
+            }
+            out.append(lead).append(body);
+        }
+        return apply(List.of(new Replacement(unitStart[0], unitEnd[count - 1], out.toString())));
+    }
+
+    /** Length of the blank lines at the start of {@code lines}. */
+    private static int leadingBlankLines(String lines) {
+        int at = 0;
+        while (at < lines.length()) {
+            int end = lines.indexOf('\n', at);
+            end = end < 0 ? lines.length() : end + 1;
+            if (!lines.substring(at, end).isBlank()) {
+                break;
+            }
+            at = end;
+        }
+        return at;
     }
 
     /** Renders a part as block lines: the first field after the dash, the others below it. */
@@ -331,6 +471,39 @@ final class CatalogText {
                     + " write it as a block list (one '- ' per part) to edit it in Yoke");
         }
         return sequence;
+    }
+
+    /** The block section at {@code path} (keys from the top level down; empty: the top level). */
+    private MappingNode section(List<String> path) throws IOException {
+        if (root == null) {
+            throw new IOException("the file is empty");
+        }
+        MappingNode node = root;
+        for (int i = 0; i < path.size(); i++) {
+            Optional<NodeTuple> tuple = tuple(node, List.of(path.get(i)));
+            if (tuple.isEmpty() || !(tuple.get().getValueNode() instanceof MappingNode mapping)) {
+                throw new IOException(String.join(".", path.subList(0, i + 1)) + " is not a section");
+            }
+            node = mapping;
+        }
+        return node;
+    }
+
+    /** The block list at {@code listPath}: the last key names the list, the others its sections. */
+    private SequenceNode blockSequenceAt(List<String> listPath) throws IOException {
+        MappingNode parent = section(listPath.subList(0, listPath.size() - 1));
+        String key = listPath.get(listPath.size() - 1);
+        NodeTuple list = tuple(parent, List.of(key))
+                .orElseThrow(() -> new IOException(String.join(".", listPath) + " is missing"));
+        return blockSequence(list, String.join(".", listPath));
+    }
+
+    private MappingNode itemAt(List<String> listPath, int index) throws IOException {
+        List<Node> items = blockSequenceAt(listPath).getValue();
+        if (index < 0 || index >= items.size() || !(items.get(index) instanceof MappingNode item)) {
+            throw new IOException(String.join(".", listPath) + " has no section #" + (index + 1));
+        }
+        return item;
     }
 
     private Optional<MappingNode> item(String listKey, String id) {

@@ -1,7 +1,6 @@
 package dev.yoke.catalog;
 
-import dev.yoke.model.Bench;
-import dev.yoke.model.Limits;
+import dev.yoke.catalog.CatalogText.FieldValue;
 import dev.yoke.model.Profile;
 import dev.yoke.model.Scenario;
 import dev.yoke.model.Segment;
@@ -15,9 +14,13 @@ import java.util.List;
 import java.util.Map;
 
 /**
- * Saves a scenario file: the whole file is written anew from the scenario (a scenario is small
- * and edited as a whole), keeping the comment block at its top. Keys follow {@link PartFields}
- * order; numbers go through {@link Units#formatExact} so that they load back as the same doubles.
+ * Saves a scenario file. An existing file is edited in place ({@link ScenarioText}, through the same
+ * text edits as a catalog part): only the lines of changed values are rewritten, so the user's
+ * comments, blank lines, key order and spelling of untouched values survive, and profile segments
+ * that were kept, edited or moved keep their own lines and comments. A new file, one that does not
+ * load, or one laid out in a way Yoke does not edit in place (flow style {@code {...}}) is written
+ * anew from the scenario, keeping the comment block at its top: keys in {@link PartFields} order,
+ * numbers through {@link Units#formatExact} so that they load back as the same doubles.
  *
  * <p>The save is atomic with a backup ({@link AtomicFile}); afterwards the file is loaded again and
  * must give back an equal scenario, otherwise the previous version is put back and
@@ -30,18 +33,29 @@ public final class ScenarioStore {
             "# Yoke scenario: the drive bench and the duty profile of one machine.\n"
                     + "# Speeds and torques are load-side; numbers carry their units.\n";
 
+    /** Reads of a file that keeps changing under an unchecked save before giving up. */
+    private static final int ATTEMPTS = 3;
+
     private ScenarioStore() {
     }
 
     /**
      * Writes {@code scenario} to {@code file} (created when absent) and returns it as loaded back.
+     * Whatever the file holds now is what is edited, even if it changed since the editor read it.
      *
      * @throws InputException the written file would not load; the previous version is back
      * @throws IOException    the disk failed, or the save did not verify ({@link SaveNotVerifiedException})
      */
     public static LoadedScenario save(Scenario scenario, Path file) throws IOException, InputException {
-        String header = Files.exists(file) ? headerOf(Files.readString(file, StandardCharsets.UTF_8)) : NEW_FILE_HEADER;
-        return write(scenario, file, header);
+        for (int attempt = 1; ; attempt++) {
+            try {
+                return write(scenario, file, textFor(scenario, file, null));
+            } catch (ChangedOnDiskException e) {
+                if (attempt == ATTEMPTS) {
+                    throw new IOException(file + " kept changing while it was being saved", e);
+                }
+            }
+        }
     }
 
     /**
@@ -52,8 +66,36 @@ public final class ScenarioStore {
      */
     public static LoadedScenario save(Scenario scenario, Path file, CatalogFile loadedAs)
             throws IOException, InputException, ChangedOnDiskException {
-        byte[] now = loadedAs.readUnchanged(file);
-        return write(scenario, file, headerOf(new String(now, StandardCharsets.UTF_8)));
+        return write(scenario, file, textFor(scenario, file, loadedAs));
+    }
+
+    /**
+     * The text to write: the file's text edited in place when it holds a scenario Yoke can edit,
+     * otherwise the scenario rendered under the file's header.
+     *
+     * @param loadedAs the version the file must still be, or null to take it as it is now
+     */
+    private static String textFor(Scenario scenario, Path file, CatalogFile loadedAs)
+            throws IOException, ChangedOnDiskException {
+        if (loadedAs == null && !Files.exists(file)) {
+            return render(scenario, NEW_FILE_HEADER);
+        }
+        byte[] bytes = loadedAs != null ? loadedAs.readUnchanged(file) : Files.readAllBytes(file);
+        String text = SourceFile.textOf(bytes);
+        LoadedScenario before;
+        try {
+            before = ScenarioLoader.load(file);
+        } catch (InputException e) {
+            return render(scenario, headerOf(text)); // a file that does not load is replaced (kept as .bak)
+        }
+        if (!before.file().sha256().equalsIgnoreCase(CatalogFile.sha256(bytes))) {
+            throw new ChangedOnDiskException(file); // changed between the two reads
+        }
+        try {
+            return ScenarioText.edited(text, before.scenario(), scenario);
+        } catch (IOException notEditable) {
+            return render(scenario, headerOf(text));
+        }
     }
 
     /** The text Yoke writes for {@code scenario} under {@code header} (comment lines, may be empty). */
@@ -62,49 +104,28 @@ public final class ScenarioStore {
         if (!header.isEmpty() && !header.endsWith("\n")) {
             out.append('\n');
         }
-        line(out, 0, "name", CatalogText.scalar(scenario.name()));
-        Bench bench = scenario.bench();
+        section(out, 0, PartKind.SCENARIO, ScenarioText.topValues(scenario));
         out.append("bench:\n");
-        section(out, 1, PartKind.BENCH, Map.ofEntries(
-                Map.entry("bus_voltage", bench.busVoltage()),
-                Map.entry("bus_voltage_min", bench.busVoltageMin()),
-                Map.entry("bus_voltage_max", bench.busVoltageMax()),
-                Map.entry("pwm_frequencies", bench.pwmFrequencies()),
-                Map.entry("modulation", bench.modulation().fileName()),
-                Map.entry("dead_time", bench.deadTime()),
-                Map.entry("gate_drive_voltage", bench.gateDriveVoltage()),
-                Map.entry("gate_resistance", bench.gateResistance()),
-                Map.entry("max_duty", bench.maxDuty()),
-                Map.entry("ambient_temp", bench.ambientTemp()),
-                Map.entry("switch_rth_case_ambient", bench.switchRthCaseAmbient()),
-                Map.entry("gear_ratios", bench.gearRatios()),
-                Map.entry("gear_efficiency", bench.gearEfficiency())));
-        Limits limits = bench.limits();
+        section(out, 1, PartKind.BENCH, ScenarioText.benchValues(scenario.bench()));
         out.append("  limits:\n");
-        section(out, 2, PartKind.LIMITS, Map.of(
-                "vds_derating", limits.vdsDerating(),
-                "junction_temp_limit", limits.junctionTempLimit(),
-                "winding_temp_margin", limits.windingTempMargin(),
-                "ripple_fraction", limits.rippleFraction()));
-        Profile profile = scenario.profile();
+        section(out, 2, PartKind.LIMITS, ScenarioText.limitsValues(scenario.bench().limits()));
         out.append("profile:\n");
-        section(out, 1, PartKind.PROFILE, Map.of(
-                "load_inertia", profile.loadInertia(),
-                "repeat", profile.repeat()));
+        section(out, 1, PartKind.PROFILE, ScenarioText.profileValues(scenario.profile()));
         out.append("  segments:\n");
-        for (Segment segment : profile.segments()) {
-            StringBuilder item = new StringBuilder();
-            section(item, 3, PartKind.SEGMENT, segmentValues(segment));
-            out.append("    - ").append(item.substring(6));
+        for (Segment segment : scenario.profile().segments()) {
+            String prefix = "    - ";
+            for (FieldValue field : ScenarioText.allFields(PartKind.SEGMENT, ScenarioText.segmentValues(segment))) {
+                out.append(prefix).append(field.key()).append(": ").append(field.scalar()).append('\n');
+                prefix = "      ";
+            }
         }
         return out.toString();
     }
 
-    /** The comment block at the top of a scenario file: leading comment and blank lines. */
+    /** The comment block at the top of a scenario file's text: leading comment and blank lines. */
     static String headerOf(String text) {
-        String body = text.startsWith("\uFEFF") ? text.substring(1) : text;
         StringBuilder header = new StringBuilder();
-        for (String line : body.split("\n", -1)) {
+        for (String line : text.split("\n", -1)) {
             String stripped = line.strip();
             if (!stripped.isEmpty() && !stripped.startsWith("#")) {
                 break;
@@ -116,9 +137,9 @@ public final class ScenarioStore {
         return kept.isBlank() ? "" : kept;
     }
 
-    private static LoadedScenario write(Scenario scenario, Path file, String header) throws IOException, InputException {
+    private static LoadedScenario write(Scenario scenario, Path file, String text) throws IOException, InputException {
         boolean existed = Files.exists(file);
-        AtomicFile.write(file, render(scenario, header).getBytes(StandardCharsets.UTF_8));
+        AtomicFile.write(file, text.getBytes(StandardCharsets.UTF_8));
         try {
             LoadedScenario back = ScenarioLoader.load(file);
             List<String> differences = differences(scenario, back.scenario());
@@ -167,27 +188,10 @@ public final class ScenarioStore {
         return differences;
     }
 
-    private static Map<String, Object> segmentValues(Segment segment) {
-        return Map.of(
-                "label", segment.label(),
-                "duration", segment.duration(),
-                "speed_start", segment.speedStart(),
-                "speed_end", segment.speedEnd(),
-                "torque", segment.torque());
-    }
-
-    /** The keys of {@code kind} that have a value in {@code values}, in table order. */
+    /** The keys of {@code kind} that have a value in {@code values}, in table order, at {@code depth}. */
     private static void section(StringBuilder out, int depth, PartKind kind, Map<String, Object> values) {
-        for (FieldSpec spec : PartFields.of(kind)) {
-            Object value = values.get(spec.key());
-            if (value == null || value instanceof String text && text.isEmpty()) {
-                continue;
-            }
-            line(out, depth, spec.key(), spec.scalar(value));
+        for (FieldValue field : ScenarioText.allFields(kind, values)) {
+            out.append("  ".repeat(depth)).append(field.key()).append(": ").append(field.scalar()).append('\n');
         }
-    }
-
-    private static void line(StringBuilder out, int depth, String key, String scalar) {
-        out.append("  ".repeat(depth)).append(key).append(": ").append(scalar).append('\n');
     }
 }

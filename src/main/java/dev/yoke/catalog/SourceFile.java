@@ -1,6 +1,7 @@
 package dev.yoke.catalog;
 
 import java.io.IOException;
+import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
@@ -9,6 +10,18 @@ import java.util.List;
 
 /** The bytes of a user's file and its identity (digest, size, time), or a problem saying why not. */
 record SourceFile(byte[] bytes, CatalogFile identity) {
+
+    /** The byte-order mark as a character: U+FEFF, EF BB BF in UTF-8 (RFC 3629, section 6). */
+    private static final char BYTE_ORDER_MARK = '\uFEFF';
+
+    /**
+     * {@code bytes} decoded as UTF-8, without the byte-order mark some editors put first: it marks
+     * the encoding and is not part of the text, so edits and saves drop it.
+     */
+    static String textOf(byte[] bytes) {
+        String text = new String(bytes, StandardCharsets.UTF_8);
+        return !text.isEmpty() && text.charAt(0) == BYTE_ORDER_MARK ? text.substring(1) : text;
+    }
 
     /** Reads {@code path}; on failure records a problem and returns null. Huge files are refused unread. */
     static SourceFile read(Path path, List<Problem> problems) {

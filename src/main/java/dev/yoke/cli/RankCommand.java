@@ -21,7 +21,6 @@ import dev.yoke.report.ShortlistTable;
 import dev.yoke.units.Dimension;
 import dev.yoke.units.UnitException;
 import dev.yoke.units.Units;
-import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.OutputStreamWriter;
 import java.io.PrintWriter;
@@ -168,12 +167,12 @@ public final class RankCommand implements Callable<Integer> {
                     writeJson(shortlist, view, out);
                     out.println();
                 } else {
-                    ByteArrayOutputStream bytes = new ByteArrayOutputStream();
-                    try (Writer w = new OutputStreamWriter(bytes, StandardCharsets.UTF_8)) {
+                    AtomicFile.write(Path.of(json), stream -> {
+                        Writer w = new OutputStreamWriter(stream, StandardCharsets.UTF_8);
                         writeJson(shortlist, view, w);
                         w.write('\n');
-                    }
-                    AtomicFile.write(Path.of(json), bytes.toByteArray(), false);
+                        w.flush();
+                    });
                 }
             }
         } catch (IOException | java.io.UncheckedIOException e) {

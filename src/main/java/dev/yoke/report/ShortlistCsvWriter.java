@@ -9,16 +9,11 @@ import dev.yoke.engine.Advisory;
 import dev.yoke.engine.Constraint;
 import dev.yoke.engine.Metric;
 import dev.yoke.engine.Shortlist;
-import java.io.BufferedWriter;
 import java.io.IOException;
-import java.io.OutputStream;
 import java.io.OutputStreamWriter;
 import java.io.Writer;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.AtomicMoveNotSupportedException;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.security.DigestOutputStream;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
@@ -65,37 +60,29 @@ public final class ShortlistCsvWriter {
     }
 
     /**
-     * Writes the rows {@code visibleOrder} of {@code shortlist} to {@code target} atomically (a
-     * temporary file in the same folder renamed over it) and the sidecar {@link Meta#sidecarOf}.
+     * Writes the rows {@code visibleOrder} of {@code shortlist} to {@code target} and then the
+     * sidecar {@link Meta#sidecarOf}, each through {@link AtomicFile}: streamed into a temporary
+     * file in the same folder, forced to the device and renamed over the target, the previous
+     * version kept as {@code NAME.bak}. The CSV is never held in memory as a whole.
      *
      * @throws IOException when the folder is missing or not writable; the target is then unchanged
      */
     public static void write(Shortlist shortlist, int[] visibleOrder, Path target, Meta meta) throws IOException {
         Path file = target.toAbsolutePath();
-        Path folder = file.getParent();
-        Path temp = Files.createTempFile(folder, "." + file.getFileName() + ".", AtomicFile.TEMP_SUFFIX);
         MessageDigest digest = sha256();
-        try {
-            try (OutputStream raw = Files.newOutputStream(temp);
-                 DigestOutputStream out = new DigestOutputStream(raw, digest);
-                 Writer w = new BufferedWriter(new OutputStreamWriter(out, StandardCharsets.UTF_8), 1 << 16)) {
-                write(shortlist, visibleOrder, w);
-            }
-            try (var channel = java.nio.channels.FileChannel.open(temp, java.nio.file.StandardOpenOption.WRITE)) {
-                channel.force(true);
-            }
-            try {
-                Files.move(temp, file, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-            } catch (AtomicMoveNotSupportedException e) {
-                Files.move(temp, file, StandardCopyOption.REPLACE_EXISTING);
-            }
-        } catch (IOException | RuntimeException e) {
-            Files.deleteIfExists(temp);
-            throw e;
-        }
+        AtomicFile.write(file, content(shortlist, visibleOrder, digest));
         byte[] sidecar = meta.toJson(file.getFileName().toString(), visibleOrder.length,
                 HexFormat.of().formatHex(digest.digest()));
-        AtomicFile.write(Meta.sidecarOf(file), sidecar, false);
+        AtomicFile.write(Meta.sidecarOf(file), sidecar);
+    }
+
+    /** The CSV as UTF-8 bytes streamed into a save, every byte also fed to {@code digest} (for the sidecar). */
+    static AtomicFile.Content content(Shortlist shortlist, int[] visibleOrder, MessageDigest digest) {
+        return out -> {
+            try (Writer w = new OutputStreamWriter(new DigestOutputStream(out, digest), StandardCharsets.UTF_8)) {
+                write(shortlist, visibleOrder, w);
+            }
+        };
     }
 
     /** Writes the CSV text to {@code out} (for {@code --csv -}); the caller closes {@code out}. */

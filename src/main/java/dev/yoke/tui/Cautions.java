@@ -31,8 +31,8 @@ public final class Cautions {
         return out;
     }
 
-    /** Greedy word wrap. */
-    static List<String> wrap(String text, int width) {
+    /** Greedy word wrap at spaces: lines of at most {@code width} columns (a longer word stands alone). */
+    public static List<String> wrap(String text, int width) {
         List<String> lines = new java.util.ArrayList<>();
         StringBuilder line = new StringBuilder();
         for (String word : text.split(" ")) {

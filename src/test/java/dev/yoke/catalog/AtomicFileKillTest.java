@@ -27,6 +27,10 @@ import org.junit.jupiter.api.io.TempDir;
  * milliseconds. After each kill the target must be byte-for-byte the old or the new version, and
  * so must the backup, and the folder must load through the catalog loader (which skips the backup
  * and the hidden temporary files a kill leaves behind). The number of kills is {@code -Dyoke.kills=N} (default 100).
+ *
+ * <p>The two lanes save through the two entry points: lane 0 hands each version over as a byte
+ * array, lane 1 streams it in small flushed pieces (as the CSV export streams its rows), so half the
+ * kills land while the temporary file is only partly written.
  */
 class AtomicFileKillTest {
 
@@ -48,9 +52,10 @@ class AtomicFileKillTest {
         List<Lane> lanes = new ArrayList<>();
         for (int lane = 0; lane < LANES; lane++) {
             Path catalog = Files.createDirectories(folder.resolve("catalog-" + lane));
-            lanes.add(new Lane(catalog.resolve("motors.yaml"), fileA, fileB, new Random(42L + lane)));
+            lanes.add(new Lane(catalog.resolve("motors.yaml"), fileA, fileB, lane == 1, new Random(42L + lane)));
         }
-        int[] counts = new int[4]; // kills, found A, found B, kills that left a temporary file behind
+        // kills, found A, found B, kills that left a temporary file behind, kills of the streaming lane, of which mid-save
+        int[] counts = new int[6];
         for (int round = 0; round * LANES < KILLS; round++) {
             List<Process> running = new ArrayList<>();
             for (Lane lane : lanes) {
@@ -74,11 +79,15 @@ class AtomicFileKillTest {
                 }
                 counts[0]++;
                 counts[isA ? 1 : 2]++;
-                counts[3] += lane.newTemps();
+                int midSave = lane.newTemps();
+                counts[3] += midSave;
+                counts[4] += lane.streamed ? 1 : 0;
+                counts[5] += lane.streamed ? midSave : 0;
             }
         }
-        System.out.printf("atomic save: %d kills survived (file found as old version %d times, new %d times,"
-                + " %d kills landed mid-save and left a temporary file)%n", counts[0], counts[1], counts[2], counts[3]);
+        System.out.printf("atomic save: %d kills survived (%d of them streaming; file found as old version %d times,"
+                + " new %d times, %d kills landed mid-save and left a temporary file, %d of them streaming)%n",
+                counts[0], counts[4], counts[1], counts[2], counts[3], counts[5]);
         assertEquals(0, counts[0] % LANES);
         assertTrue(counts[0] >= KILLS);
     }
@@ -88,13 +97,15 @@ class AtomicFileKillTest {
         final Path target;
         final Path fileA;
         final Path fileB;
+        final boolean streamed;
         final Random random;
         int tempsSeen;
 
-        Lane(Path target, Path fileA, Path fileB, Random random) {
+        Lane(Path target, Path fileA, Path fileB, boolean streamed, Random random) {
             this.target = target;
             this.fileA = fileA;
             this.fileB = fileB;
+            this.streamed = streamed;
             this.random = random;
         }
 
@@ -102,7 +113,8 @@ class AtomicFileKillTest {
             String java = Path.of(System.getProperty("java.home"), "bin", "java").toString();
             ProcessBuilder builder = new ProcessBuilder(java, "-Xshare:auto", "-XX:TieredStopAtLevel=1", "-XX:-UsePerfData",
                     "-XX:+UseSerialGC", "-Dyoke.plainWrite=" + Boolean.getBoolean("yoke.plainWrite"), "-cp", System.getProperty("java.class.path"),
-                    AtomicWriteLoop.class.getName(), target.toString(), fileA.toString(), fileB.toString());
+                    AtomicWriteLoop.class.getName(), target.toString(), fileA.toString(), fileB.toString(),
+                    streamed ? "stream" : "bytes");
             builder.redirectErrorStream(true);
             return builder.start();
         }

@@ -1,7 +1,9 @@
 package dev.yoke.catalog;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertSame;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -103,6 +105,52 @@ class AtomicFileTest {
         assertThrows(IOException.class, () -> AtomicFile.write(target, bytes("x")));
         assertEquals("keep", Files.readString(target.resolve("inside")));
         assertEquals(List.of("motors.yaml"), entries());
+    }
+
+    @Test
+    void streamedContentReplacesTheFileAndKeepsTheBackup() throws IOException {
+        Path target = folder.resolve("shortlist.csv");
+        AtomicFile.write(target, bytes("first\r\n"));
+        AtomicFile.write(target, out -> {
+            for (int row = 0; row < 3; row++) {
+                out.write(bytes("row " + row + "\r\n"));
+            }
+            out.close(); // closing only flushes: the save still forces and renames afterwards
+        });
+        assertEquals("row 0\r\nrow 1\r\nrow 2\r\n", Files.readString(target));
+        assertEquals("first\r\n", Files.readString(AtomicFile.backupOf(target)));
+        assertEquals(List.of("shortlist.csv", "shortlist.csv.bak"), entries(), "no temporary file is left behind");
+    }
+
+    /**
+     * Content that fails part way, after more than one buffer has reached the temporary file, with a
+     * checked exception, an unchecked one and an error: each comes back to the caller as it was
+     * thrown, the old file and its backup stay byte for byte, and the temporary file is gone.
+     */
+    @Test
+    void failingContentLeavesTheOldFileByteIdenticalAndNoTemporary() throws IOException {
+        Path target = folder.resolve("motors.yaml");
+        byte[] old = bytes("motors:\n  - id: old-motor # comment kept\n");
+        AtomicFile.write(target, bytes("older"));
+        AtomicFile.write(target, old);
+        List<Throwable> failures = List.of(new IOException("disk full"), new IllegalStateException("bad row"),
+                new Error("simulated"));
+        for (Throwable failure : failures) {
+            Throwable thrown = assertThrows(Throwable.class, () -> AtomicFile.write(target, out -> {
+                out.write(new byte[200_000]); // past the buffer: part of it is already in the temporary file
+                out.flush();
+                throwUnchecked(failure);
+            }));
+            assertSame(failure, thrown);
+            assertArrayEquals(old, Files.readAllBytes(target));
+            assertEquals("older", Files.readString(AtomicFile.backupOf(target)));
+            assertEquals(List.of("motors.yaml", "motors.yaml.bak"), entries(), "no temporary file is left behind");
+        }
+    }
+
+    @SuppressWarnings("unchecked")
+    private static <T extends Throwable> void throwUnchecked(Throwable failure) throws T {
+        throw (T) failure;
     }
 
     private List<String> entries() throws IOException {

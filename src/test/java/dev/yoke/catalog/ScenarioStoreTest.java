@@ -98,6 +98,19 @@ class ScenarioStoreTest {
         assertEquals("", ScenarioStore.headerOf("name: x\n"));
     }
 
+    /** A byte-order mark before the header (some editors write one) is dropped, the comments are kept. */
+    @Test
+    void byteOrderMarkIsDroppedAndTheHeaderKept() throws Exception {
+        Path file = copy("scenario.yaml");
+        String before = Files.readString(file);
+        Files.writeString(file, "\uFEFF" + before);
+        LoadedScenario loaded = ScenarioLoader.load(file);
+        ScenarioStore.save(loaded.scenario(), file, loaded.file());
+        String after = Files.readString(file);
+        assertTrue(after.startsWith("# Invented machine for the store and fuzz tests"), after);
+        assertEquals(loaded.scenario(), ScenarioLoader.load(file).scenario());
+    }
+
     static Stream<Path> demoScenarios() throws IOException {
         try (Stream<Path> files = Files.list(Path.of("demo-data"))) {
             return files.filter(p -> p.toString().endsWith(".yaml")).sorted().toList().stream();

@@ -149,4 +149,19 @@ class RankCommandTest {
         assertEquals("5", meta.get("options").get("top").asText());
         assertEquals(5, meta.get("rows").asInt());
     }
+
+    /** A JSON export file is streamed through the atomic save: it parses, and the previous export is kept as NAME.bak. */
+    @Test
+    void jsonExportToAFileKeepsThePreviousExportAsBackup(@TempDir Path dir) throws Exception {
+        Path json = dir.resolve("rover.json");
+        Run first = run("rank", DEMO, "--json", json.toString(), "--top", "2");
+        assertEquals(0, first.status(), first.err());
+        byte[] previous = Files.readAllBytes(json);
+        assertEquals(2, new ObjectMapper().readTree(previous).size());
+        Run second = run("rank", DEMO, "--json", json.toString(), "--top", "4");
+        assertEquals(0, second.status(), second.err());
+        assertEquals(4, new ObjectMapper().readTree(json.toFile()).size());
+        assertTrue(java.util.Arrays.equals(previous, Files.readAllBytes(dir.resolve("rover.json.bak"))),
+                "the backup holds the first export byte for byte");
+    }
 }

@@ -1,5 +1,6 @@
 package dev.yoke.report;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -16,15 +17,18 @@ import dev.yoke.engine.Shortlist;
 import dev.yoke.engine.SortKey;
 import dev.yoke.engine.Sweep;
 import dev.yoke.engine.TestEvaluators;
+import java.io.OutputStream;
 import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.security.MessageDigest;
 import java.time.Instant;
+import java.util.ArrayList;
 import java.util.HexFormat;
 import java.util.List;
 import java.util.Map;
+import java.util.concurrent.atomic.AtomicLong;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -142,10 +146,9 @@ class ShortlistCsvWriterTest {
         ShortlistCsvWriter.write(s, order, target, meta);
         byte[] written = Files.readAllBytes(target);
         assertEquals(csv(s, order), new String(written, StandardCharsets.UTF_8));
-        try (var files = Files.list(dir)) {
-            assertEquals(List.of("short.csv", "short.meta.json"), files.map(p -> p.getFileName().toString()).sorted().toList(),
-                    "no temporary file left behind");
-        }
+        assertEquals(List.of("short.csv", "short.csv.bak", "short.meta.json"), entries(dir),
+                "the file it replaced is kept as a backup, and no temporary file is left behind");
+        assertEquals("old content", Files.readString(dir.resolve("short.csv.bak")));
         JsonNode sidecar = new ObjectMapper().readTree(dir.resolve("short.meta.json").toFile());
         assertEquals("9.9", sidecar.get("yoke_version").asText());
         assertEquals("bench.yaml", sidecar.get("scenario").get("path").asText());
@@ -155,5 +158,127 @@ class ShortlistCsvWriterTest {
         assertEquals("--csv", sidecar.get("command").get(2).asText());
         assertEquals(HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(written)),
                 sidecar.get("export_sha256").asText());
+    }
+
+    /** A second export keeps the first one, and its sidecar, as NAME.bak beside the new ones. */
+    @Test
+    void backupHoldsThePreviousExportAndItsSidecar(@TempDir Path dir) throws Exception {
+        Shortlist s = Sweep.all(TestEvaluators.small());
+        Path target = dir.resolve("short.csv");
+        Meta meta = new Meta("9.9", Instant.EPOCH, null, List.of(), List.of(), Map.of());
+        ShortlistCsvWriter.write(s, Ranking.order(s, SortKey.DEFAULT), target, meta);
+        byte[] first = Files.readAllBytes(target);
+        byte[] firstSidecar = Files.readAllBytes(dir.resolve("short.meta.json"));
+        int[] second = Ranking.view(s, SortKey.parseList("cost:desc"), dev.yoke.engine.RowFilter.ALL.withFeasibleOnly(true));
+
+        ShortlistCsvWriter.write(s, second, target, meta);
+
+        assertEquals(csv(s, second), Files.readString(target));
+        assertArrayEquals(first, Files.readAllBytes(dir.resolve("short.csv.bak")));
+        assertArrayEquals(firstSidecar, Files.readAllBytes(dir.resolve("short.meta.json.bak")));
+        assertEquals(List.of("short.csv", "short.csv.bak", "short.meta.json", "short.meta.json.bak"), entries(dir));
+    }
+
+    /**
+     * The export streams: the save's stream receives the first bytes after a small share of the rows
+     * has been generated, and then many writes none larger than a buffer, so the CSV never exists
+     * in memory as a whole. Rows generated are counted through the catalog look-ups the writer makes
+     * for each row's part ids and labels.
+     */
+    @Test
+    void largeExportIsStreamedRowByRowNotBuiltInMemory() throws Exception {
+        List<String> ids = new ArrayList<>();
+        for (int i = 0; i < 100; i++) {
+            ids.add("part-" + i);
+        }
+        CatalogCounter counted = new CatalogCounter(TestEvaluators.withIds(ids, ids));
+        Shortlist s = Sweep.all(counted);
+        int[] order = Ranking.order(s, SortKey.DEFAULT);
+        counted.lookUps.set(0);
+        SinkWatch sink = new SinkWatch(counted);
+
+        ShortlistCsvWriter.content(s, order, MessageDigest.getInstance("SHA-256")).writeTo(sink);
+
+        long rowsGenerated = counted.lookUps.get() / LOOK_UPS_PER_ROW;
+        assertEquals(order.length, rowsGenerated, "four catalog look-ups per row (motor and switch id and label)");
+        assertTrue(order.length >= 20_000, "a shortlist large enough to matter: " + order.length + " rows");
+        assertTrue(sink.bytes > 4L << 20, "several megabytes of CSV: " + sink.bytes);
+        assertTrue(sink.rowsBeforeFirstWrite < order.length / 100,
+                "bytes reached the save after " + sink.rowsBeforeFirstWrite + " of " + order.length + " rows");
+        assertTrue(sink.largestWrite <= 1 << 16, "no write larger than a buffer: " + sink.largestWrite);
+        assertTrue(sink.writes > sink.bytes / (1 << 16), sink.writes + " writes");
+    }
+
+    /** Catalog look-ups per CSV row: motor id, motor label, switch id, switch label. */
+    private static final long LOOK_UPS_PER_ROW = 4;
+
+    /** An evaluator that counts how often its catalog is asked for (the writer asks per row). */
+    private static final class CatalogCounter implements dev.yoke.engine.PairingEvaluator {
+        final dev.yoke.engine.PairingEvaluator inner;
+        final AtomicLong lookUps = new AtomicLong();
+
+        CatalogCounter(dev.yoke.engine.PairingEvaluator inner) {
+            this.inner = inner;
+        }
+
+        @Override
+        public dev.yoke.model.Scenario scenario() {
+            return inner.scenario();
+        }
+
+        @Override
+        public dev.yoke.model.Catalog catalog() {
+            lookUps.incrementAndGet();
+            return inner.catalog();
+        }
+
+        @Override
+        public MotorSide prepare(int motor, int frequency, int ratio) {
+            return inner.prepare(motor, frequency, ratio);
+        }
+
+        @Override
+        public void summarize(MotorSide motorSide, int switchIndex, double[] row) {
+            inner.summarize(motorSide, switchIndex, row);
+        }
+
+        @Override
+        public dev.yoke.engine.PairingResult explain(int motor, int switchIndex, int frequency, int ratio) {
+            return inner.explain(motor, switchIndex, frequency, ratio);
+        }
+    }
+
+    /** Stands in for the save's stream: counts bytes and writes, and how many rows existed at the first write. */
+    private static final class SinkWatch extends OutputStream {
+        final CatalogCounter counted;
+        long bytes;
+        long writes;
+        long largestWrite;
+        long rowsBeforeFirstWrite = -1;
+
+        SinkWatch(CatalogCounter counted) {
+            this.counted = counted;
+        }
+
+        @Override
+        public void write(int b) {
+            write(new byte[] {(byte) b}, 0, 1);
+        }
+
+        @Override
+        public void write(byte[] b, int off, int len) {
+            if (rowsBeforeFirstWrite < 0) {
+                rowsBeforeFirstWrite = counted.lookUps.get() / LOOK_UPS_PER_ROW;
+            }
+            bytes += len;
+            writes++;
+            largestWrite = Math.max(largestWrite, len);
+        }
+    }
+
+    private static List<String> entries(Path dir) throws Exception {
+        try (var files = Files.list(dir)) {
+            return files.map(p -> p.getFileName().toString()).sorted().toList();
+        }
     }
 }

@@ -10,6 +10,7 @@ import com.googlecode.lanterna.gui2.Window;
 import com.googlecode.lanterna.gui2.WindowBasedTextGUI;
 import com.googlecode.lanterna.input.KeyStroke;
 import com.googlecode.lanterna.input.KeyType;
+import dev.yoke.tui.Cautions;
 
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -44,7 +45,7 @@ final class ChoiceWindow extends BasicWindow {
         }
         ChoiceWindow window = new ChoiceWindow(title, last);
         Panel panel = new Panel(new LinearLayout(Direction.VERTICAL));
-        panel.addComponent(new Label(wrap(AsciiText.of(message, unicode), 60)));
+        panel.addComponent(new Label(String.join("\n", Cautions.wrap(AsciiText.of(message, unicode), 60))));
         Panel buttons = new Panel(new LinearLayout(Direction.HORIZONTAL));
         for (Map.Entry<String, Runnable> a : answers.entrySet()) {
             Runnable action = a.getValue();
@@ -58,24 +59,6 @@ final class ChoiceWindow extends BasicWindow {
         window.setComponent(panel);
         gui.addWindow(window);
         return window;
-    }
-
-    /** Breaks {@code text} into lines of at most {@code width} columns at spaces. */
-    static String wrap(String text, int width) {
-        StringBuilder out = new StringBuilder();
-        int lineLength = 0;
-        for (String word : text.split(" ")) {
-            if (lineLength > 0 && lineLength + 1 + word.length() > width) {
-                out.append('\n');
-                lineLength = 0;
-            } else if (lineLength > 0) {
-                out.append(' ');
-                lineLength++;
-            }
-            out.append(word);
-            lineLength += word.length();
-        }
-        return out.toString();
     }
 
     private static String lastKey(LinkedHashMap<String, Runnable> answers) {

@@ -14,8 +14,8 @@ import java.nio.file.Path;
 
 /**
  * Saves scenario files through the catalog package's {@link ScenarioStore}: atomic, the previous
- * version kept as {@code NAME.bak}, the file's header comment kept, the written file loaded back
- * and compared. It remembers the version it last read or wrote, so a file changed by someone else
+ * version kept as {@code NAME.bak}, the file edited in place so that the user's comments and layout
+ * survive, the written file loaded back and compared. It remembers the version it last read or wrote, so a file changed by someone else
  * in between is reported rather than overwritten.
  */
 final class ScenarioFiles implements ScenarioSaver {

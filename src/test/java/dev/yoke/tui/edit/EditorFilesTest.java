@@ -154,6 +154,35 @@ class EditorFilesTest {
         assertTrue(Files.readString(file).startsWith("# Bench-top belt conveyor"), "the header comment is kept");
     }
 
+    /**
+     * The user's comments survive a save from the editor: a changed value's line keeps its trailing
+     * comment, a removed segment's lines go, every other line (comments between and inside the
+     * segments included) is the user's text unchanged.
+     */
+    @Test
+    void scenarioSavedFromTheEditorKeepsTheUsersComments() throws Exception {
+        Path file = dir.resolve("rover-wheel.yaml");
+        String original = Files.readString(Path.of("demo-data", "rover-wheel.yaml"))
+                .replace("  bus_voltage: 25.2 V\n", "  bus_voltage: 25.2 V   # 7 cells, nominal\n")
+                .replace("    - label: cruise\n", "    # the patrol loop proper\n    - label: cruise\n")
+                .replace("      torque: -0.48 N*m\n", "      torque: -0.48 N*m   # regenerating\n");
+        Files.writeString(file, original);
+        Scenario start = ScenarioLoader.load(file).scenario();
+        try (TerminalDriver t = new TerminalDriver(100, 30)) {
+            ScenarioEditor editor = ScenarioEditor.open(t.gui, start, file, s -> { });
+            t.press(KeyType.ArrowDown).clearField(20).type("24 V");
+            t.press(KeyType.Tab).press(KeyType.ArrowDown, 4).type("x").press(KeyType.F2); // removes "brake"
+            assertTrue(t.text().contains("Saved rover-wheel.yaml"), t.text());
+            assertEquals(editor.current().orElseThrow(), ScenarioLoader.load(file).scenario());
+        }
+        String expected = original
+                .replace("  bus_voltage: 25.2 V   # 7 cells, nominal\n", "  bus_voltage: 24 V   # 7 cells, nominal\n")
+                .replace("    - label: brake\n      duration: 1.5 s\n      speed_start: 10 rad/s\n"
+                        + "      speed_end: 0 rad/s\n      torque: 0.25 N*m\n", "");
+        assertEquals(expected, Files.readString(file));
+        assertEquals(original, Files.readString(AtomicFile.backupOf(file)), "the backup is the previous file");
+    }
+
     @Test
     void scenarioChangedOnDiskIsNotOverwrittenWithoutAsking() throws Exception {
         Path file = dir.resolve("conveyor.yaml");
