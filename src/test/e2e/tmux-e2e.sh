@@ -1,6 +1,7 @@
 #!/bin/sh
 # End-to-end run of the workbench in a real terminal (tmux): start it on the demo scenario, sort by
-# cost, open a pairing's detail, export the view to CSV, open help, quit. Screen captures go to
+# cost, open a pairing's detail, export the view to CSV, open help, quit; then open a scenario with a
+# mistake and expect its problems printed with exit status 2. Screen captures go to
 # OUT/NN-name.txt for the calling test to check; the script itself fails fast when a screen it
 # waits for never appears.
 #
@@ -92,3 +93,29 @@ wait_for "shown /" 10
 keys q
 wait_for "YOKE-EXIT=" 10
 capture 07-after-quit
+
+# A scenario with a mistake: the screen opens while the files are read, closes when the reading
+# fails, and the problems are printed in the terminal with exit status 2.
+cat > "$work/broken.yaml" <<'YAML'
+name: x
+bench:
+  bus_voltage: 24 mH
+profile: 3
+YAML
+tm new-session -d -s bad -x 120 -y 40 \
+    "cd '$work' && TERM=xterm-256color LANG=C.UTF-8 LC_ALL= java -Djava.awt.headless=true -jar '$jar' open '$work/broken.yaml' --catalog '$project/catalog'; echo YOKE-EXIT=\$?; sleep 120"
+wait_bad() {
+    tries=300
+    while [ "$tries" -gt 0 ]; do
+        if tm capture-pane -p -t bad 2>/dev/null | grep -F -q -- "YOKE-EXIT="; then
+            return 0
+        fi
+        sleep 0.1
+        tries=$(( tries - 1 ))
+    done
+    tm capture-pane -p -t bad > "$out/timeout.txt" 2>/dev/null || true
+    echo "tmux-e2e: the broken scenario run did not end within 30 s" >&2
+    exit 1
+}
+wait_bad
+tm capture-pane -p -t bad > "$out/08-load-error.txt"

@@ -34,6 +34,11 @@ public final class CatalogLoader {
         return loadFiles(catalogFiles(dir));
     }
 
+    /** As {@link #load(Path)}, telling {@code listener} about each file as it is read. */
+    public static LoadedCatalog load(Path dir, LoadListener listener) throws InputException {
+        return loadFiles(catalogFiles(dir), listener);
+    }
+
     /** The catalog files of {@code dir}, sorted by name. */
     public static List<Path> catalogFiles(Path dir) throws InputException {
         if (!Files.isDirectory(dir)) {
@@ -57,6 +62,12 @@ public final class CatalogLoader {
      * @throws InputException listing every error (and the warnings found alongside)
      */
     public static LoadedCatalog loadFiles(List<Path> paths) throws InputException {
+        return loadFiles(paths, LoadListener.NONE);
+    }
+
+    /** As {@link #loadFiles(List)}, telling {@code listener} about each file as it is read. */
+    public static LoadedCatalog loadFiles(List<Path> paths, LoadListener listener) throws InputException {
+        listener.filesFound(paths);
         List<Problem> problems = new ArrayList<>();
         List<Motor> motors = new ArrayList<>();
         List<PowerSwitch> switches = new ArrayList<>();
@@ -67,8 +78,8 @@ public final class CatalogLoader {
         // Files are read and checked in parallel (each on its own problem list), then merged in
         // name order, so the result and the order of problems do not depend on the threads.
         List<FileResult> results = paths.size() > 1
-                ? paths.parallelStream().map(CatalogLoader::readFile).toList()
-                : paths.stream().map(CatalogLoader::readFile).toList();
+                ? paths.parallelStream().map(p -> readFile(p, listener)).toList()
+                : paths.stream().map(p -> readFile(p, listener)).toList();
         for (int i = 0; i < paths.size(); i++) {
             Path path = paths.get(i);
             FileResult result = results.get(i);
@@ -93,6 +104,14 @@ public final class CatalogLoader {
 
     /** One file read and checked on its own: its stamp (null when unreadable), its parts (null when not YAML), its problems. */
     private record FileResult(CatalogFile identity, CatalogReader reader, List<Problem> problems) {
+    }
+
+    private static FileResult readFile(Path path, LoadListener listener) {
+        listener.fileStarted(path);
+        FileResult result = readFile(path);
+        CatalogReader reader = result.reader();
+        listener.fileRead(path, reader == null ? 0 : reader.motors.size() + reader.switches.size());
+        return result;
     }
 
     private static FileResult readFile(Path path) {

@@ -2,6 +2,7 @@ package dev.yoke.cli;
 
 import dev.yoke.catalog.CatalogLoader;
 import dev.yoke.catalog.InputException;
+import dev.yoke.catalog.LoadListener;
 import dev.yoke.catalog.LoadedCatalog;
 import dev.yoke.catalog.LoadedScenario;
 import dev.yoke.catalog.Problem;
@@ -41,19 +42,29 @@ record Inputs(LoadedScenario scenario, LoadedCatalog catalog) {
      * @throws InputException with the problems of both files
      */
     static Inputs read(Path scenarioFile, Path catalogDir) throws InputException {
+        return read(scenarioFile, catalogDir, LoadListener.NONE);
+    }
+
+    /**
+     * As {@link #read(Path, Path)}, telling {@code listener} about each file as it is read (the
+     * workbench shows it while a large catalog loads); the scenario is the last file.
+     */
+    static Inputs read(Path scenarioFile, Path catalogDir, LoadListener listener) throws InputException {
         List<Problem> problems = new ArrayList<>();
         LoadedCatalog catalog = null;
         LoadedScenario scenario = null;
         try {
-            catalog = CatalogLoader.load(catalogDir);
+            catalog = CatalogLoader.load(catalogDir, listener);
         } catch (InputException e) {
             problems.addAll(e.problems());
         }
+        listener.fileStarted(scenarioFile);
         try {
             scenario = ScenarioLoader.load(scenarioFile);
         } catch (InputException e) {
             problems.addAll(e.problems());
         }
+        listener.fileRead(scenarioFile, 0);
         if (scenario == null || catalog == null) {
             throw new InputException(problems);
         }

@@ -1,14 +1,15 @@
 package dev.yoke.cli;
 
+import com.googlecode.lanterna.gui2.WindowBasedTextGUI;
 import dev.yoke.catalog.CatalogFile;
-import dev.yoke.catalog.InputException;
 import dev.yoke.catalog.LoadedCatalog;
-import dev.yoke.catalog.LoadedScenario;
 import dev.yoke.catalog.Problem;
 import dev.yoke.model.Scenario;
+import dev.yoke.tui.BackgroundLoad;
 import dev.yoke.tui.ColorDepth;
 import dev.yoke.tui.EditorHooks;
 import dev.yoke.tui.EngineBackend;
+import dev.yoke.tui.StartupScreen;
 import dev.yoke.tui.TerminalSession;
 import dev.yoke.tui.TerminalTraits;
 import dev.yoke.tui.Workbench;
@@ -20,6 +21,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
+import java.util.function.Function;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -58,6 +60,13 @@ public final class OpenCommand implements Callable<Integer> {
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
+    /** Runs a screen loop on a terminal: the user's own, or a virtual one in tests. */
+    @FunctionalInterface
+    interface ScreenRunner {
+        StartupScreen<Inputs> run(Function<WindowBasedTextGUI, StartupScreen<Inputs>> factory)
+                throws IOException, InterruptedException;
+    }
+
     @Override
     public Integer call() {
         PrintWriter err = spec.commandLine().getErr();
@@ -67,25 +76,6 @@ public final class OpenCommand implements Callable<Integer> {
             err.println("yoke open: " + why + "; the workbench needs a terminal. For scripts use 'yoke rank'.");
             return YokeCommand.BAD_INPUT;
         }
-        // Reading a catalog of thousands of parts takes seconds before the screen can open: say so.
-        String reading = "yoke: reading the catalog " + catalogOption.catalogDir + " and the scenario...";
-        err.print(reading + "\r");
-        err.flush();
-        Inputs inputs;
-        try {
-            inputs = Inputs.read(scenarioFile, catalogOption.catalogDir);
-        } catch (InputException e) {
-            err.print(" ".repeat(reading.length()) + "\r");
-            for (Problem p : e.problems()) {
-                err.println(p);
-            }
-            err.flush();
-            return YokeCommand.BAD_INPUT;
-        }
-        err.print(" ".repeat(reading.length()) + "\r");
-        err.flush();
-        LoadedCatalog catalog = inputs.catalog();
-        LoadedScenario scenario = inputs.scenario();
         TerminalTraits traits = TerminalTraits.fromEnvironment(env);
         switch (colors) {
             case mono -> traits = traits.withColorDepth(ColorDepth.MONOCHROME);
@@ -96,28 +86,60 @@ public final class OpenCommand implements Callable<Integer> {
         if (ascii) {
             traits = traits.withUnicode(false);
         }
-        List<Path> files = new ArrayList<>();
-        for (CatalogFile f : catalog.files()) {
-            files.add(f.path());
-        }
-        EngineBackend backend = new EngineBackend(VersionProvider.version(), scenarioFile, files);
-        Scenario start = scenario.scenario();
-        LoadedCatalog parts = catalog;
         TerminalTraits chosen = traits;
+        return open(chosen, factory -> TerminalSession.run(chosen, factory), err);
+    }
+
+    /**
+     * Opens the screen at once and reads the catalog and scenario behind it (a large catalog takes
+     * seconds: the screen shows each file as it is read, and Esc or q leaves). Once both are read
+     * the workbench takes over. Problems in the files close the screen and are printed as
+     * {@code file:line:column: field: message}, exit status 2, as before the screen existed.
+     */
+    int open(TerminalTraits traits, ScreenRunner runner, PrintWriter err) {
+        Path catalogDir = catalogOption.catalogDir;
+        BackgroundLoad<Inputs> load = BackgroundLoad.of(listener -> Inputs.read(scenarioFile, catalogDir, listener));
+        String subject = catalogDir + " and " + scenarioFile;
+        StartupScreen<Inputs> startup;
         try {
-            TerminalSession.run(chosen, gui -> {
-                Workbench workbench = new Workbench(gui, chosen, backend, start, parts.catalog(), parts.implausibleIds(),
-                        Path.of("").toAbsolutePath());
-                workbench.setEditors(editors());
-                return workbench;
-            });
+            startup = runner.run(gui -> new StartupScreen<>(gui, traits, subject, load,
+                    (opened, inputs) -> workbench(opened, traits, inputs)));
         } catch (IOException e) {
             err.println("yoke open: could not use the terminal: " + e.getMessage() + ". For scripts use 'yoke rank'.");
             return YokeCommand.BAD_INPUT;
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();
+            return YokeCommand.OK;
+        }
+        if (!startup.problems().isEmpty()) {
+            for (Problem p : startup.problems()) {
+                err.println(p);
+            }
+            err.flush();
+            return YokeCommand.BAD_INPUT;
+        }
+        Throwable crash = startup.crash();
+        if (crash instanceof RuntimeException e) {
+            throw e;
+        }
+        if (crash instanceof Error e) {
+            throw e;
         }
         return YokeCommand.OK;
+    }
+
+    private Workbench workbench(WindowBasedTextGUI gui, TerminalTraits traits, Inputs inputs) {
+        LoadedCatalog catalog = inputs.catalog();
+        List<Path> files = new ArrayList<>();
+        for (CatalogFile f : catalog.files()) {
+            files.add(f.path());
+        }
+        EngineBackend backend = new EngineBackend(VersionProvider.version(), scenarioFile, files);
+        Scenario start = inputs.scenario().scenario();
+        Workbench workbench = new Workbench(gui, traits, backend, start, catalog.catalog(), catalog.implausibleIds(),
+                Path.of("").toAbsolutePath());
+        workbench.setEditors(editors());
+        return workbench;
     }
 
     /** The editors behind the workbench's edit keys: they save through the catalog package's stores. */

@@ -95,24 +95,12 @@ public final class DetailReport {
         out.add(Line.blank());
 
         List<SegmentResult> segments = r.segments();
-        int labelWidth = 7;
-        for (SegmentResult s : segments) {
-            labelWidth = Math.max(labelWidth, Math.min(16, s.label().length()));
-        }
+        int labelWidth = labelWidth(segments);
+        // Laid out to fit the screen (narrower cells, then two lines a segment) so that every
+        // column, the junction temperature last, is readable without scrolling sideways.
         out.add(Line.of(Tone.HEADING, "Per segment"));
-        out.add(Line.of(Tone.DIM, "  " + KeyMap.pad("segment", labelWidth) + row(
-                "time s", "rpm", "N*m", "I avg", "I rms", "I pk", "V", "duty%", "ripple", "Tw " + deg, "Tj " + deg)));
-        for (SegmentResult s : segments) {
-            double tj = Double.NEGATIVE_INFINITY;
-            for (double j : s.junctionTemps()) {
-                tj = Math.max(tj, j);
-            }
-            out.add(Line.of("  " + KeyMap.pad(Painter.clip(s.label(), labelWidth), labelWidth) + row(
-                    Cells.number(s.duration()), Cells.number(s.motorSpeed() * RPM_PER_RAD_S), Cells.number(s.motorTorque()),
-                    Cells.number(s.currentAvg()), Cells.number(s.currentRms()), Cells.number(s.currentPeak()),
-                    Cells.number(s.terminalVoltage()), Cells.percent(s.duty()), Cells.number(s.currentRipplePp()),
-                    Cells.number(s.windingTempPeak()), Cells.number(tj))));
-        }
+        FittedTable table = segmentTable(segments, labelWidth, deg);
+        out.addAll(table.lines(width));
         out.add(Line.blank());
 
         double cycle = 0;
@@ -206,6 +194,33 @@ public final class DetailReport {
         out.add(Line.blank());
         out.add(Line.of(Tone.DIM, "Screening estimates: measure the built drive (press c for the cautions)."));
         return out;
+    }
+
+    /** The per-segment table: time, speed, torque, currents, voltage, duty, ripple, winding and hottest junction. */
+    static FittedTable segmentTable(List<SegmentResult> segments, int labelWidth, String deg) {
+        FittedTable table = new FittedTable("segment", labelWidth, List.of(
+                "time s", "rpm", "N*m", "I avg", "I rms", "I pk", "V", "duty%", "ripple", "Tw " + deg, "Tj " + deg));
+        for (SegmentResult s : segments) {
+            double tj = Double.NEGATIVE_INFINITY;
+            for (double j : s.junctionTemps()) {
+                tj = Math.max(tj, j);
+            }
+            table.add(s.label(), List.of(
+                    Cells.number(s.duration()), Cells.number(s.motorSpeed() * RPM_PER_RAD_S), Cells.number(s.motorTorque()),
+                    Cells.number(s.currentAvg()), Cells.number(s.currentRms()), Cells.number(s.currentPeak()),
+                    Cells.number(s.terminalVoltage()), Cells.percent(s.duty()), Cells.number(s.currentRipplePp()),
+                    Cells.number(s.windingTempPeak()), Cells.number(tj)));
+        }
+        return table;
+    }
+
+    /** Width of the segment-label column: the longest label, between 7 and 16 columns. */
+    static int labelWidth(List<SegmentResult> segments) {
+        int labelWidth = 7;
+        for (SegmentResult s : segments) {
+            labelWidth = Math.max(labelWidth, Math.min(16, s.label().length()));
+        }
+        return labelWidth;
     }
 
     private static String row(String... cells) {

@@ -20,7 +20,8 @@ public final class KeyMap {
         SHORTLIST("Shortlist"),
         DETAIL("Pairing detail"),
         PAGE("Help and cautions"),
-        DIALOG("Dialogs");
+        DIALOG("Dialogs"),
+        LOADING("While the catalog and scenario are read");
 
         private final String title;
 
@@ -63,6 +64,8 @@ public final class KeyMap {
         PAGE_SCROLL(View.PAGE, "Up Down PgUp PgDn Home End", "scroll", "scroll the page", false,
                 KeyType.ArrowUp, KeyType.ArrowDown, KeyType.PageUp, KeyType.PageDown, KeyType.Home, KeyType.End),
         PAGE_BACK(View.PAGE, "Esc q", "back", "back to the previous screen", true, KeyType.Escape, 'q'),
+
+        LEAVE_WHILE_READING(View.LOADING, "Esc q Ctrl+C", "quit", "stop reading and leave Yoke", true, KeyType.Escape, 'q'),
 
         ACCEPT(View.DIALOG, "Enter", "accept", "accept the text typed", true, KeyType.Enter),
         DISMISS(View.DIALOG, "Esc", "cancel", "close without changing anything", true, KeyType.Escape),
@@ -120,11 +123,11 @@ public final class KeyMap {
                     return true;
                 }
             }
-            return this == QUIT && isInterrupt(stroke);
+            return (this == QUIT || this == LEAVE_WHILE_READING) && isInterrupt(stroke);
         }
 
         private boolean worksOn(View screen) {
-            return view == screen || (view == null && screen != View.DIALOG);
+            return view == screen || (view == null && screen != View.DIALOG && screen != View.LOADING);
         }
     }
 
@@ -168,7 +171,7 @@ public final class KeyMap {
             }
             String item = firstKey(a) + " " + a.footerWord();
             boolean isPinned = a == Action.QUIT || a == Action.HELP || a == Action.BACK || a == Action.PAGE_BACK
-                    || a == Action.DISMISS;
+                    || a == Action.DISMISS || a == Action.LEAVE_WHILE_READING;
             (isPinned ? pinned : others).add(item);
         }
         String tail = String.join("  ", pinned);
@@ -198,13 +201,16 @@ public final class KeyMap {
         return space < 0 ? k : k.substring(0, space);
     }
 
+    /** The heading of the keys that work on the shortlist, detail and pages. */
+    private static final String SHARED_TITLE = "Everywhere but in dialogs and while reading";
+
     /** Keys longer than this go on a line of their own in help, the description below them. */
     private static final int HELP_KEY_WIDTH = 10;
 
     /** Help text: for each screen its title, then one line per key (two when the keys are long). */
     public static List<String> helpLines() {
         List<String> lines = new ArrayList<>();
-        for (View screen : new View[] {View.SHORTLIST, View.DETAIL, View.PAGE, View.DIALOG}) {
+        for (View screen : new View[] {View.SHORTLIST, View.DETAIL, View.PAGE, View.DIALOG, View.LOADING}) {
             lines.add(screen.title());
             for (Action a : Action.values()) {
                 if (a.view() == screen) {
@@ -213,7 +219,7 @@ public final class KeyMap {
             }
             lines.add("");
         }
-        lines.add("Everywhere but in dialogs");
+        lines.add(SHARED_TITLE);
         addHelpLine(lines, Action.HELP);
         addHelpLine(lines, Action.CAUTIONS);
         return lines;
@@ -231,8 +237,8 @@ public final class KeyMap {
     /** The keys as a Markdown table per screen, for the documentation (docs/keys.md is checked against it). */
     public static String markdown() {
         StringBuilder md = new StringBuilder();
-        for (View screen : new View[] {View.SHORTLIST, View.DETAIL, View.PAGE, View.DIALOG, null}) {
-            md.append("\n### ").append(screen == null ? "Everywhere but in dialogs" : screen.title()).append("\n\n");
+        for (View screen : new View[] {View.SHORTLIST, View.DETAIL, View.PAGE, View.DIALOG, View.LOADING, null}) {
+            md.append("\n### ").append(screen == null ? SHARED_TITLE : screen.title()).append("\n\n");
             md.append("| keys | what they do |\n|---|---|\n");
             for (Action a : Action.values()) {
                 if (a.view() == screen) {

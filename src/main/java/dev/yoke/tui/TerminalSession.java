@@ -45,13 +45,14 @@ public final class TerminalSession {
     }
 
     /**
-     * Runs a workbench on the user's terminal until the user leaves.
+     * Runs a screen loop (the workbench, or the reading view that becomes it) on the user's
+     * terminal until the user leaves; returns it, so the owner can ask how it ended.
      *
      * @param traits  colours and character set to use
-     * @param factory makes the workbench for the opened screen
+     * @param factory makes the loop for the opened screen
      * @throws IOException when the terminal cannot be opened or written
      */
-    public static void run(TerminalTraits traits, Function<WindowBasedTextGUI, Workbench> factory)
+    public static <T extends ScreenLoop> T run(TerminalTraits traits, Function<WindowBasedTextGUI, T> factory)
             throws IOException, InterruptedException {
         Charset charset = traits.unicode() ? StandardCharsets.UTF_8 : StandardCharsets.US_ASCII;
         DefaultTerminalFactory terminalFactory = new DefaultTerminalFactory(System.out, System.in, charset)
@@ -59,27 +60,34 @@ public final class TerminalSession {
                 // Lets "ESC [ A" split across packets (SSH, tmux) still decode as one arrow key.
                 .setInputTimeout(1)
                 .setUnixTerminalCtrlCBehaviour(UnixLikeTerminal.CtrlCBehaviour.TRAP);
-        TerminalScreen screen = null;
+        Terminal terminal = terminalFactory.createTerminal();
+        return runOn(new TerminalScreen(terminal), factory);
+    }
+
+    /**
+     * Runs a screen loop on a screen until it is finished: starts the screen, draws, answers keys,
+     * ticks the loop between them, and stops the screen whatever happens (the user's terminal
+     * must never be left in raw mode). Tests pass a screen on a virtual terminal.
+     */
+    public static <T extends ScreenLoop> T runOn(TerminalScreen screen, Function<WindowBasedTextGUI, T> factory)
+            throws IOException, InterruptedException {
         try {
-            Terminal terminal = terminalFactory.createTerminal();
-            screen = new TerminalScreen(terminal);
             screen.startScreen();
             screen.setCursorPosition(null);
             MultiWindowTextGUI gui = new MultiWindowTextGUI(screen, new DefaultWindowManager(),
                     new EmptySpace(TextColor.ANSI.DEFAULT));
-            Workbench workbench = factory.apply(gui);
-            workbench.open();
-            while (!workbench.isFinished()) {
+            T loop = factory.apply(gui);
+            loop.open();
+            while (!loop.isFinished()) {
                 boolean busy = gui.getGUIThread().processEventsAndUpdate();
-                workbench.tick();
+                busy |= loop.tick();
                 if (!busy) {
                     Thread.sleep(15);
                 }
             }
+            return loop;
         } finally {
-            if (screen != null) {
-                screen.stopScreen();
-            }
+            screen.stopScreen();
         }
     }
 }

@@ -42,6 +42,12 @@ public final class TextPage extends AbstractInteractableComponent<TextPage> {
         return top;
     }
 
+    /** Lays the content out again on the next draw (content that changes while shown: the reading progress). */
+    public synchronized void relayout() {
+        lines = null;
+        invalidate();
+    }
+
     /** The lines as last laid out (for tests and captures). */
     public synchronized List<Line> lines() {
         return lines == null ? layout.apply(100) : lines;

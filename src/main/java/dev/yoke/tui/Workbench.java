@@ -34,7 +34,7 @@ import java.util.function.Function;
  * is only read through {@link BackgroundRanking}. The owner calls {@link #tick()} between input
  * events to pick up progress and finished rankings.
  */
-public final class Workbench {
+public final class Workbench implements ScreenLoop {
 
     private final WindowBasedTextGUI gui;
     private final TerminalTraits traits;
@@ -131,6 +131,7 @@ public final class Workbench {
     }
 
     /** Shows the shortlist and starts the first ranking. */
+    @Override
     public void open() {
         gui.addWindow(shortlistWindow);
         gui.setActiveWindow(shortlistWindow);
@@ -188,6 +189,7 @@ public final class Workbench {
     }
 
     /** True once the user asked to leave. */
+    @Override
     public boolean isFinished() {
         return finished;
     }
@@ -224,6 +226,7 @@ public final class Workbench {
      *
      * @return true when something on screen changed
      */
+    @Override
     public boolean tick() {
         boolean viewChanged = takeFinishedView() | takeFinishedExport();
         if (ranking == null) {

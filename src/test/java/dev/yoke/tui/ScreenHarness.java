@@ -10,6 +10,8 @@ import com.googlecode.lanterna.input.KeyStroke;
 import com.googlecode.lanterna.input.KeyType;
 import com.googlecode.lanterna.screen.TerminalScreen;
 import com.googlecode.lanterna.terminal.virtual.DefaultVirtualTerminal;
+import dev.yoke.model.Catalog;
+import dev.yoke.model.Scenario;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.Set;
@@ -29,13 +31,19 @@ final class ScreenHarness implements AutoCloseable {
 
     ScreenHarness(int columns, int rows, TerminalTraits traits, Path exportFolder, Fixtures.TestBackend backend,
             Set<String> suspects) throws IOException {
+        this(columns, rows, traits, exportFolder, backend, Fixtures.scenario(),
+                Fixtures.catalog(backend.motors, backend.switches), suspects);
+    }
+
+    /** A workbench on any scenario and catalog (the demo, for layouts that depend on real labels). */
+    ScreenHarness(int columns, int rows, TerminalTraits traits, Path exportFolder, Fixtures.TestBackend backend,
+            Scenario scenario, Catalog catalog, Set<String> suspects) throws IOException {
         terminal = new DefaultVirtualTerminal(new TerminalSize(columns, rows));
         screen = new TerminalScreen(terminal);
         screen.startScreen();
         gui = new MultiWindowTextGUI(screen, new DefaultWindowManager(), new EmptySpace(TextColor.ANSI.DEFAULT));
         this.backend = backend;
-        workbench = new Workbench(gui, traits, backend, Fixtures.scenario(),
-                Fixtures.catalog(backend.motors, backend.switches), suspects, exportFolder);
+        workbench = new Workbench(gui, traits, backend, scenario, catalog, suspects, exportFolder);
         workbench.open();
     }
 

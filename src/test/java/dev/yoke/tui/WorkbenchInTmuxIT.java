@@ -2,6 +2,7 @@ package dev.yoke.tui;
 
 import static org.junit.jupiter.api.Assertions.assertAll;
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.junit.jupiter.api.Assertions.fail;
 
@@ -23,7 +24,8 @@ import org.junit.jupiter.api.io.TempDir;
 
 /**
  * The packaged jar in a real terminal: {@code src/test/e2e/tmux-e2e.sh} drives it in tmux (sort by
- * cost, detail, export, help, cautions, quit) and this test checks the captured screens and the CSV.
+ * cost, detail, export, help, cautions, quit; then a scenario with a mistake) and this test checks
+ * the captured screens, the CSV and the printed problems.
  * Runs after {@code package} (failsafe), skipped without tmux unless YOKE_REQUIRE_REFERENCES=1.
  */
 class WorkbenchInTmuxIT {
@@ -68,6 +70,14 @@ class WorkbenchInTmuxIT {
                 () -> assertTrue(read("05-help.txt").contains("Help: keys"), read("05-help.txt")),
                 () -> assertTrue(read("06-cautions.txt").contains("licensed electrician")),
                 () -> assertTrue(read("07-after-quit.txt").contains("YOKE-EXIT=0"), read("07-after-quit.txt")));
+
+        // A mistake in the scenario: printed after the screen closed, located, exit status 2, no stack trace.
+        String loadError = read("08-load-error.txt");
+        assertAll(
+                () -> assertTrue(loadError.contains("broken.yaml:3:16: bus_voltage: expected volts (V), got '24 mH'"), loadError),
+                () -> assertTrue(loadError.contains("YOKE-EXIT=2"), loadError),
+                () -> assertFalse(loadError.contains("Exception"), loadError),
+                () -> assertFalse(loadError.contains("Esc quit"), "the reading view is gone from the terminal: " + loadError));
 
         // The screen's cost column ascends from the top row down.
         List<String> lines = sorted.lines().toList();
