@@ -222,6 +222,7 @@ final class MotorSidePlan implements PairingEvaluator.MotorSide {
         double vMin = bench.busVoltageMin();
         availableVoltage = ConductionPattern.maxVoltageRatio(modulation, bench.maxDuty()) * vMin;
         double outputFrequency = frequency / ConductionPattern.ripplePeriodFactor(modulation);
+        double deadFraction = bench.deadTime() * frequency;
         double sumSquare = 0;
         double peakMax = 0;
         double duty = 0;
@@ -281,10 +282,10 @@ final class MotorSidePlan implements PairingEvaluator.MotorSide {
             int base = 4 * k;
             if (v0 * v1 < 0) {
                 double z = v0 / (v0 - v1);
-                addPattern(ConductionPattern.of(modulation, v0 / 2 / bus, i), z, ms, base, k);
-                addPattern(ConductionPattern.of(modulation, v1 / 2 / bus, i), 1 - z, ms, base, k);
+                addPattern(ConductionPattern.of(modulation, v0 / 2 / bus, i, deadFraction), z, ms, base, k);
+                addPattern(ConductionPattern.of(modulation, v1 / 2 / bus, i, deadFraction), 1 - z, ms, base, k);
             } else {
-                addPattern(ConductionPattern.of(modulation, vMean / bus, i), 1.0, ms, base, k);
+                addPattern(ConductionPattern.of(modulation, vMean / bus, i, deadFraction), 1.0, ms, base, k);
             }
             gateSum += weight[k] * switchingCount[k];
         }

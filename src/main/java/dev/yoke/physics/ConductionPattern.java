@@ -13,6 +13,12 @@ import dev.yoke.model.Modulation;
  * its high switch and freewheels through its low switch's body diode during the dead times; a leg
  * sinking current does the reverse. Every regenerating quadrant follows from the sign of the leg current.
  *
+ * <p>Dead time: the commutating (hard-switching) switch keeps the carrier's edges, since a drive that controls
+ * its current ends up commanding the voltage the motor needs and that switch's edges make it (dead-time
+ * compensation by the sign of the current, common practice). Its partner's channel is off during both dead
+ * times of the leg, while its body diode carries the current, so its on-fraction is the complement less
+ * 2·t_dead·f: counting the dead time in the channel as well as in the diode would count it twice.
+ *
  * <ul>
  * <li>Bipolar: leg A high-side duty d = (1 + V/V_bus)/2, leg B 1 − d; output ±V_bus at f.</li>
  * <li>Unipolar: leg A (1 + V/V_bus)/2, leg B (1 − V/V_bus)/2, carriers 180° apart; output 0 or ±V_bus at 2f.</li>
@@ -20,7 +26,8 @@ import dev.yoke.model.Modulation;
  * holds its low switch on.</li>
  * </ul>
  *
- * @param onFraction      fraction of the period each position's channel is on
+ * @param onFraction      fraction of the period each position's channel is on (its body diode's dead-time
+ *                        share excluded when the pattern is made with a dead time)
  * @param hardSwitching   1 where the position makes the hard turn-on and turn-off of its leg, else 0
  * @param freewheeling    1 where the position's body diode carries the dead times of its leg, else 0
  * @param switchingCount  number of switches driven at the PWM frequency (gate-drive loss)
@@ -94,6 +101,36 @@ public record ConductionPattern(
      * @param current     motor current, A (only its sign matters)
      */
     public static ConductionPattern of(Modulation modulation, double voltageRatio, double current) {
+        return of(modulation, voltageRatio, current, 0.0);
+    }
+
+    /**
+     * The pattern for a modulation with dead time: each freewheeling position's channel on-fraction is reduced by
+     * 2·t_dead·f (never below 0), the time its body diode conducts instead.
+     *
+     * @param modulation   switching scheme
+     * @param voltageRatio V/V_bus, clamped to [−1, 1]
+     * @param current      motor current, A (only its sign matters)
+     * @param deadFraction dead time × switching frequency, t_dead·f (one dead time as a fraction of the period)
+     */
+    public static ConductionPattern of(Modulation modulation, double voltageRatio, double current,
+            double deadFraction) {
+        ConductionPattern ideal = ideal(modulation, voltageRatio, current);
+        if (!(deadFraction > 0)) {
+            return ideal;
+        }
+        double[] on = ideal.onFraction;
+        for (int p = 0; p < POSITIONS; p++) {
+            if (ideal.freewheeling[p] > 0) {
+                on[p] = Math.max(0.0, on[p] - 2 * deadFraction);
+            }
+        }
+        return new ConductionPattern(on, ideal.hardSwitching, ideal.freewheeling, ideal.switchingCount,
+                ideal.rippleSwing, ideal.rippleOnFraction, ideal.ripplePeriodFactor, ideal.duty, ideal.highSideDuty);
+    }
+
+    /** The pattern with no dead time. */
+    private static ConductionPattern ideal(Modulation modulation, double voltageRatio, double current) {
         double v = clampRatio(voltageRatio);
         double m = Math.abs(v);
         double[] on = new double[POSITIONS];

@@ -80,4 +80,28 @@ class ConductionPatternTest {
         assertEquals(maxDuty, ConductionPattern.of(m, ratio, 1).highSideDuty(), 1e-12);
         assertEquals(maxDuty, ConductionPattern.of(m, -ratio, 1).highSideDuty(), 1e-12);
     }
+
+    /**
+     * Law (conservation of time): in a switching leg the two channels and the freewheeling diode share the
+     * period, channel + channel + 2·t_dead·f = 1, so with a dead time the freewheeling position's channel gives
+     * up exactly the diode's share and the commutating position keeps its duty (the dead time is counted once).
+     */
+    @ParameterizedTest
+    @MethodSource("table")
+    void deadTimeComesOutOfTheFreewheelingChannelOnly(Modulation m, double v, int sign) {
+        double deadFraction = 500e-9 * 20e3;
+        ConductionPattern ideal = ConductionPattern.of(m, v, sign * 3.0);
+        ConductionPattern p = ConductionPattern.of(m, v, sign * 3.0, deadFraction);
+        for (int i = 0; i < ConductionPattern.POSITIONS; i++) {
+            double expected = ideal.onFraction(i) - 2 * deadFraction * ideal.freewheeling(i);
+            assertEquals(expected, p.onFraction(i), 1e-12, ConductionPattern.POSITION_NAMES[i]);
+            assertEquals(ideal.hardSwitching(i), p.hardSwitching(i));
+            assertEquals(ideal.freewheeling(i), p.freewheeling(i));
+        }
+        for (int high : new int[] {ConductionPattern.HIGH_A, ConductionPattern.HIGH_B}) {
+            double diode = 2 * deadFraction * (p.freewheeling(high) + p.freewheeling(high + 1));
+            double legBusy = p.onFraction(high) + p.onFraction(high + 1) + diode;
+            assertEquals(1.0, legBusy, 1e-12, "leg of " + ConductionPattern.POSITION_NAMES[high]);
+        }
+    }
 }

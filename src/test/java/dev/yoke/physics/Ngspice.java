@@ -17,9 +17,10 @@ import java.util.regex.Pattern;
 /**
  * Runs the ngspice circuit simulator (Debian package {@code ngspice}) in batch mode on a netlist and reads
  * back its {@code .meas} results. Skips the calling test when ngspice is missing, unless the environment
- * sets {@code YOKE_REQUIRE_REFERENCES=1} (CI), where a missing simulator fails.
+ * sets {@code YOKE_REQUIRE_REFERENCES=1} (CI), where a missing simulator fails. Public for the engine's
+ * reference tests (test sources only).
  */
-final class Ngspice {
+public final class Ngspice {
 
     private static final Pattern MEASURE = Pattern.compile("^\\s*(\\w+)\\s*=\\s*([-+0-9.eE]+)");
 
@@ -27,7 +28,7 @@ final class Ngspice {
     }
 
     /** Skips (or, when references are required, fails) when ngspice is not on the PATH. */
-    static void requireInstalled() {
+    public static void requireInstalled() {
         boolean found = false;
         String path = System.getenv("PATH");
         if (path != null) {
@@ -44,7 +45,7 @@ final class Ngspice {
     }
 
     /** Simulates a netlist in a fresh temporary folder; returns every measurement by lower-case name. */
-    static Map<String, Double> measure(String netlist) {
+    public static Map<String, Double> measure(String netlist) {
         try {
             Path dir = Files.createTempDirectory("yoke-ngspice");
             try {
