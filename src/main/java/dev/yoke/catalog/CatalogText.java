@@ -151,41 +151,69 @@ final class CatalogText {
 
     /**
      * The text with the given fields of the section at {@code path} (see {@link #keysAt}) set,
-     * like {@link #withFields(String, String, List)} does for a part.
+     * like {@link #withFields(String, String, List)} does for a part; a key the section lacks is
+     * placed after the nearest key before it in {@code keyOrder}.
      */
-    String withSectionFields(List<String> path, List<FieldValue> fields) throws IOException {
-        return withFields(section(path), path.isEmpty() ? "the top level" : String.join(".", path), fields);
+    String withSectionFields(List<String> path, List<FieldValue> fields, List<String> keyOrder) throws IOException {
+        return withFields(section(path), path.isEmpty() ? "the top level" : String.join(".", path), fields, keyOrder);
     }
 
     /**
      * The text with the given fields of item {@code index} (from 0) of the list at
-     * {@code listPath} set, like {@link #withFields(String, String, List)} does for a part.
+     * {@code listPath} set, like {@link #withSectionFields} does for a section.
      */
-    String withItemFields(List<String> listPath, int index, List<FieldValue> fields) throws IOException {
-        return withFields(itemAt(listPath, index), String.join(".", listPath) + " #" + (index + 1), fields);
+    String withItemFields(List<String> listPath, int index, List<FieldValue> fields, List<String> keyOrder)
+            throws IOException {
+        return withFields(itemAt(listPath, index), String.join(".", listPath) + " #" + (index + 1), fields, keyOrder);
     }
 
     /** Sets {@code fields} in {@code item} ({@code what} names it in messages). */
     private String withFields(MappingNode item, String what, List<FieldValue> fields) throws IOException {
+        return withFields(item, what, fields, List.of());
+    }
+
+    /**
+     * Sets {@code fields} in {@code item} ({@code what} names it in messages). A key the item lacks
+     * goes on a new line after the nearest key before it in {@code keyOrder} that the item has (at
+     * the item's start when it has none); with no order given, after the item's last line.
+     */
+    private String withFields(MappingNode item, String what, List<FieldValue> fields, List<String> keyOrder)
+            throws IOException {
         if (item.getFlowStyle() == FlowStyle.FLOW) {
             throw new IOException(what + " is written in flow style {...};"
                     + " write it as a block (one field per line) to edit it in Yoke");
         }
         List<Replacement> replacements = new ArrayList<>();
-        StringBuilder added = new StringBuilder();
-        String keyIndent = " ".repeat(column(charIndex(item.getStartMark())));
+        java.util.Map<Integer, StringBuilder> added = new java.util.TreeMap<>();
+        int itemStart = charIndex(item.getStartMark());
+        String keyIndent = " ".repeat(column(itemStart));
+        int end = nextLineStart(contentEnd(item));
         for (FieldValue field : fields) {
             Optional<NodeTuple> present = tuple(item, field.acceptedKeys());
             if (present.isPresent()) {
                 replacements.add(replacementOf(present.get(), field));
+                continue;
+            }
+            String line = field.key() + ": " + field.scalar();
+            int at = end;
+            int place = keyOrder.indexOf(field.key());
+            if (place >= 0) {
+                at = -1;
+                for (int k = place - 1; k >= 0 && at < 0; k--) {
+                    Optional<NodeTuple> before = tuple(item, List.of(keyOrder.get(k)));
+                    if (before.isPresent()) {
+                        at = nextLineStart(valueEnd(before.get()));
+                    }
+                }
+            }
+            if (at < 0) {
+                added.computeIfAbsent(itemStart, k -> new StringBuilder()).append(line).append(newline).append(keyIndent);
             } else {
-                added.append(keyIndent).append(field.key()).append(": ").append(field.scalar()).append(newline);
+                added.computeIfAbsent(at, k -> new StringBuilder(endsWithNewline(k) ? "" : newline))
+                        .append(keyIndent).append(line).append(newline);
             }
         }
-        if (added.length() > 0) {
-            int at = nextLineStart(contentEnd(item));
-            replacements.add(new Replacement(at, at, (endsWithNewline(at) ? "" : newline) + added));
-        }
+        added.forEach((at, text) -> replacements.add(new Replacement(at, at, text.toString())));
         return apply(replacements);
     }
 

@@ -58,7 +58,7 @@ final class ScenarioText {
             Map<String, Object> after) throws IOException {
         CatalogText document = CatalogText.parse(text);
         List<FieldValue> writes = writes(kind, before, after, document.keysAt(path), -1, -1);
-        return writes.isEmpty() ? text : document.withSectionFields(path, writes);
+        return writes.isEmpty() ? text : document.withSectionFields(path, writes, keyOrder(kind));
     }
 
     private static String withSegments(String text, List<Segment> was, List<Segment> now) throws IOException {
@@ -75,7 +75,7 @@ final class ScenarioText {
             List<FieldValue> writes = writes(PartKind.SEGMENT, segmentValues(was.get(i)), segmentValues(now.get(j)),
                     document.keysOfItem(SEGMENTS, i), i, j);
             if (!writes.isEmpty()) {
-                out = document.withItemFields(SEGMENTS, i, writes);
+                out = document.withItemFields(SEGMENTS, i, writes, keyOrder(PartKind.SEGMENT));
             }
         }
         if (sameRows) {
@@ -119,6 +119,11 @@ final class ScenarioText {
             }
         }
         return writes;
+    }
+
+    /** The keys of {@code kind} in table order: where a key the file lacks is put. */
+    private static List<String> keyOrder(PartKind kind) {
+        return PartFields.of(kind).stream().map(FieldSpec::key).toList();
     }
 
     /** The label the loader gives the unlabelled segment at {@code index} (from 0). */

@@ -92,6 +92,8 @@ class ScenarioStoreCommentsTest {
                 diff.removed);
         assertEquals(List.of("  bus_voltage: 22 V        # nominal; bus_voltage_max is left to follow it",
                 "  bus_voltage_max: 24 V"), diff.added);
+        // A key the file lacked goes where the table puts it: after the key before it.
+        assertTrue(Files.readString(file).contains("  bus_voltage_min: 20 V    # battery sag\n  bus_voltage_max: 24 V\n"));
     }
 
     @Test
@@ -123,7 +125,7 @@ class ScenarioStoreCommentsTest {
         // The unlabelled segment is now second: the label the editor shows ("segment 3") is written
         // out, or it would load back as "segment 2".
         String expected = original.replace(holdLines, "")
-                .replace("      torque: 1 N*m\n", "      torque: 1 N*m\n      label: segment 3\n");
+                .replace("    - duration: 1 s", "    - label: segment 3\n      duration: 1 s");
         assertEquals(expected, Files.readString(file));
         String text = Files.readString(file);
         for (String comment : List.of("# Invented machine", "# the lift cycle", "# from the floor",
@@ -170,7 +172,7 @@ class ScenarioStoreCommentsTest {
         String expected = original.replace(raiseEnd, raiseEnd + "\n    - label: raise more\n      duration: 500 ms\n"
                         + "      speed_start: 3 rad/s\n      speed_end: 3.5 rad/s\n      torque: 2 N*m\n")
                 // the unlabelled segment moves from third to fourth: its label is written to stay "segment 3"
-                .replace("      torque: 1 N*m\n", "      torque: 1 N*m\n      label: segment 3\n");
+                .replace("    - duration: 1 s", "    - label: segment 3\n      duration: 1 s");
         assertEquals(expected, Files.readString(file));
     }
 
