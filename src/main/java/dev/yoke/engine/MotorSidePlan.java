@@ -266,10 +266,15 @@ final class MotorSidePlan implements PairingEvaluator.MotorSide {
             RippleWaveform w1 = ripples.get(r, d1);
             RippleWaveform ws = ripples.get(r, dStar);
             ripple[k] = Math.max(ws.peakToPeak(), Math.max(w0.peakToPeak(), w1.peakToPeak()));
-            peak[k] = Math.max(ws.peak(i), Math.max(w0.peak(i), w1.peak(i)));
+            // Unipolar and sign-magnitude with V < 0 run the waveform upside down: its extremes are those of
+            // the waveform around −I. The half-way waveform is symmetric; a clamped one is an end's.
+            double i0 = ConductionPattern.rippleSign(modulation, v0 / bus) * i;
+            double i1 = ConductionPattern.rippleSign(modulation, v1 / bus) * i;
+            double iStar = dStar == d0 ? i0 : dStar == d1 ? i1 : i;
+            peak[k] = Math.max(ws.peak(iStar), Math.max(w0.peak(i0), w1.peak(i1)));
             rippleWorst = Math.max(rippleWorst, ripple[k]);
             peakMax = Math.max(peakMax, peak[k]);
-            discontinuous |= ws.crossesZero(i) || w0.crossesZero(i) || w1.crossesZero(i);
+            discontinuous |= ws.crossesZero(iStar) || w0.crossesZero(i0) || w1.crossesZero(i1);
 
             copperLoss[k] = ms * r;
             terminalPower[k] = i * vMean + variance * r;

@@ -191,7 +191,7 @@ public record ConductionPattern(
                 high[positive ? LOW_B : HIGH_B] = m;
                 return new ConductionPattern(on, hard, free, 4, rippleSwing(modulation), m,
                         ripplePeriodFactor(modulation), m, highSideDuty(modulation, v), high, low,
-                        positive ? 1.0 : -1.0, 0.0);
+                        rippleSign(modulation, v), 0.0);
             }
             case SIGN_MAGNITUDE: {
                 // The switching leg's high switch makes the ±V_bus pulses (high intervals, m), its low switch
@@ -207,7 +207,7 @@ public record ConductionPattern(
                 low[hold] = 1 - m;
                 return new ConductionPattern(on, hard, free, 2, rippleSwing(modulation), m,
                         ripplePeriodFactor(modulation), m, highSideDuty(modulation, v), high, low,
-                        legASwitches ? 1.0 : -1.0, 0.0);
+                        rippleSign(modulation, v), 0.0);
             }
             default:
                 throw new IllegalArgumentException("unknown modulation " + modulation);
@@ -273,6 +273,15 @@ public record ConductionPattern(
     public static double rippleOnFraction(Modulation modulation, double voltageRatio) {
         double v = clampRatio(voltageRatio);
         return modulation == Modulation.BIPOLAR ? (1 + v) / 2 : Math.abs(v);
+    }
+
+    /**
+     * +1, or −1 where the output is the {@link PwmRipple} waveform of on-fraction {@link #rippleOnFraction}
+     * upside down: unipolar and sign-magnitude with V &lt; 0, whose pulses are −V_bus. The real current is then
+     * I − deviation, so its extremes are those of {@code waveform.peak(sign × I)}.
+     */
+    public static double rippleSign(Modulation modulation, double voltageRatio) {
+        return modulation != Modulation.BIPOLAR && voltageRatio < 0 ? -1.0 : 1.0;
     }
 
     /** Duty as reported: bipolar d = (1 + V/V_bus)/2, unipolar and sign-magnitude m = |V|/V_bus. */
