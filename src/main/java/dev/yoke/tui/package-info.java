@@ -1,5 +1,6 @@
 /**
- * The full-screen terminal workbench on Lanterna: the shortlist grid (a virtualized component that
+ * The full-screen terminal workbench on Lanterna: the start-up view that shows the catalog and
+ * scenario being read on a background thread ({@link dev.yoke.tui.StartupScreen}), the shortlist grid (a virtualized component that
  * draws only the visible rows), the pairing detail, help and cautions pages, the one-line prompts
  * (find, margin threshold, CSV export), background ranking and sorting, and the terminal set-up
  * (text terminal only, colour depth and character set from the environment). Keys live in
