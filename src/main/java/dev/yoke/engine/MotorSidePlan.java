@@ -64,13 +64,13 @@ final class MotorSidePlan implements PairingEvaluator.MotorSide {
     final double[] mechanicalPower;
     final double[] switchingCount;
 
-    /** Per piece k and position p at k·4 + p: on-fraction × I_rms² (A²). */
+    /** Per piece k and position p at k·4 + p: on-fraction × the channel's mean-square current (A²). */
     final double[] conduction;
     /** Per piece and position: fraction of the piece the position hard-switches. */
     final double[] hard;
     /** Per piece and position: hard fraction × |I| (A). */
     final double[] hardCurrent;
-    /** Per piece and position: freewheeling fraction × |I| (A). */
+    /** Per piece and position: freewheeling fraction × the mean |I| at the dead times (the ripple's extremes), A. */
     final double[] freeCurrent;
     /** Doubles per fast-path cell: conduction, hard, hard × |I|, freewheel × |I|, cycle weight × multiplicity. */
     static final int CELL = 5;
@@ -282,10 +282,10 @@ final class MotorSidePlan implements PairingEvaluator.MotorSide {
             int base = 4 * k;
             if (v0 * v1 < 0) {
                 double z = v0 / (v0 - v1);
-                addPattern(ConductionPattern.of(modulation, v0 / 2 / bus, i, deadFraction), z, ms, base, k);
-                addPattern(ConductionPattern.of(modulation, v1 / 2 / bus, i, deadFraction), 1 - z, ms, base, k);
+                addPattern(modulation, v0 / 2 / bus, deadFraction, ripples, r, z, ms, base, k);
+                addPattern(modulation, v1 / 2 / bus, deadFraction, ripples, r, 1 - z, ms, base, k);
             } else {
-                addPattern(ConductionPattern.of(modulation, vMean / bus, i, deadFraction), 1.0, ms, base, k);
+                addPattern(modulation, vMean / bus, deadFraction, ripples, r, 1.0, ms, base, k);
             }
             gateSum += weight[k] * switchingCount[k];
         }
@@ -397,13 +397,23 @@ final class MotorSidePlan implements PairingEvaluator.MotorSide {
         return Math.abs(x - y) <= 1e-13 * Math.max(Math.abs(x), Math.abs(y));
     }
 
-    private void addPattern(ConductionPattern pattern, double share, double ms, int base, int k) {
+    /**
+     * Adds one conduction pattern's coefficients, weighted by the share of the piece it holds for: each channel's
+     * mean square from the exact ripple's interval moments, each freewheeling diode's current at the ripple's
+     * extremes ({@link ConductionPattern#channelSquare}, {@link ConductionPattern#freewheelingCurrent}).
+     */
+    private void addPattern(Modulation modulation, double voltageRatio, double deadFraction, RippleCache ripples,
+            double r, double share, double ms, int base, int k) {
+        ConductionPattern pattern = ConductionPattern.of(modulation, voltageRatio, current[k], deadFraction);
+        RippleWaveform w = ripples.get(r, ConductionPattern.rippleOnFraction(modulation, voltageRatio));
+        double i = current[k];
         double absI = absCurrent[k];
+        double diodeCurrent = pattern.freewheelingCurrent(i, w);
         for (int p = 0; p < 4; p++) {
-            conduction[base + p] += share * pattern.onFraction(p) * ms;
+            conduction[base + p] += share * pattern.channelSquare(p, i, ms, w);
             hard[base + p] += share * pattern.hardSwitching(p);
             hardCurrent[base + p] += share * pattern.hardSwitching(p) * absI;
-            freeCurrent[base + p] += share * pattern.freewheeling(p) * absI;
+            freeCurrent[base + p] += share * pattern.freewheeling(p) * diodeCurrent;
         }
         switchingCount[k] += share * pattern.switchingCount();
     }

@@ -36,6 +36,12 @@ import dev.yoke.model.Modulation;
  * @param ripplePeriodFactor output period as a multiple of 1/f (0.5 for unipolar)
  * @param duty            duty as reported: bipolar d, unipolar and sign-magnitude m = |V|/V_bus
  * @param highSideDuty    largest on-fraction of a high switch (what a bootstrap supply limits)
+ * @param highShare       per position, the part of the period its channel is on (dead time aside) while the
+ *                        ripple waveform of {@link PwmRipple} is in its high interval (δ = {@code rippleOnFraction})
+ * @param lowShare        the same in the waveform's low interval
+ * @param rippleSign      +1, or −1 where the real output is that waveform upside down (unipolar and
+ *                        sign-magnitude with V &lt; 0, whose δ = |V|/V_bus is the share of the −V_bus level)
+ * @param deadFraction    one dead time as a fraction of the period, t_dead·f (0 when made without)
  */
 public record ConductionPattern(
         double[] onFraction,
@@ -46,7 +52,11 @@ public record ConductionPattern(
         double rippleOnFraction,
         double ripplePeriodFactor,
         double duty,
-        double highSideDuty) {
+        double highSideDuty,
+        double[] highShare,
+        double[] lowShare,
+        double rippleSign,
+        double deadFraction) {
 
     public static final int HIGH_A = 0;
     public static final int LOW_A = 1;
@@ -61,6 +71,18 @@ public record ConductionPattern(
         onFraction = onFraction.clone();
         hardSwitching = hardSwitching.clone();
         freewheeling = freewheeling.clone();
+        highShare = highShare.clone();
+        lowShare = lowShare.clone();
+    }
+
+    @Override
+    public double[] highShare() {
+        return highShare.clone();
+    }
+
+    @Override
+    public double[] lowShare() {
+        return lowShare.clone();
     }
 
     @Override
@@ -126,7 +148,8 @@ public record ConductionPattern(
             }
         }
         return new ConductionPattern(on, ideal.hardSwitching, ideal.freewheeling, ideal.switchingCount,
-                ideal.rippleSwing, ideal.rippleOnFraction, ideal.ripplePeriodFactor, ideal.duty, ideal.highSideDuty);
+                ideal.rippleSwing, ideal.rippleOnFraction, ideal.ripplePeriodFactor, ideal.duty, ideal.highSideDuty,
+                ideal.highShare, ideal.lowShare, ideal.rippleSign, deadFraction);
     }
 
     /** The pattern with no dead time. */
@@ -136,32 +159,97 @@ public record ConductionPattern(
         double[] on = new double[POSITIONS];
         double[] hard = new double[POSITIONS];
         double[] free = new double[POSITIONS];
+        double[] high = new double[POSITIONS];
+        double[] low = new double[POSITIONS];
         switch (modulation) {
             case BIPOLAR: {
+                // +V_bus (HA, LB on) is the waveform's high interval, δ = d; −V_bus (LA, HB on) its low one.
                 double d = (1 + v) / 2;
                 leg(on, hard, free, HIGH_A, d, true, current);
                 leg(on, hard, free, HIGH_B, 1 - d, true, -current);
+                high[HIGH_A] = d;
+                high[LOW_B] = d;
+                low[LOW_A] = 1 - d;
+                low[HIGH_B] = 1 - d;
                 return new ConductionPattern(on, hard, free, 4, rippleSwing(modulation), d,
-                        ripplePeriodFactor(modulation), d, highSideDuty(modulation, v));
+                        ripplePeriodFactor(modulation), d, highSideDuty(modulation, v), high, low, 1.0, 0.0);
             }
             case UNIPOLAR: {
+                // Per switching period the output makes two ±V_bus pulses (the waveform's high intervals, m of
+                // the period in all) and two zero intervals of (1 − m)/2 each, one with both high switches on,
+                // one with both low switches on. The leg whose duty exceeds ½ is on through both pulses.
                 double dA = (1 + v) / 2;
                 double dB = (1 - v) / 2;
                 leg(on, hard, free, HIGH_A, dA, true, current);
                 leg(on, hard, free, HIGH_B, dB, true, -current);
+                double zero = (1 - m) / 2;
+                for (int p = 0; p < POSITIONS; p++) {
+                    low[p] = zero;
+                }
+                boolean positive = v >= 0;
+                high[positive ? HIGH_A : LOW_A] = m;
+                high[positive ? LOW_B : HIGH_B] = m;
                 return new ConductionPattern(on, hard, free, 4, rippleSwing(modulation), m,
-                        ripplePeriodFactor(modulation), m, highSideDuty(modulation, v));
+                        ripplePeriodFactor(modulation), m, highSideDuty(modulation, v), high, low,
+                        positive ? 1.0 : -1.0, 0.0);
             }
             case SIGN_MAGNITUDE: {
+                // The switching leg's high switch makes the ±V_bus pulses (high intervals, m), its low switch
+                // the zero intervals (1 − m); the other leg's low switch is on throughout.
                 boolean legASwitches = v >= 0;
                 leg(on, hard, free, HIGH_A, legASwitches ? m : 0, legASwitches, current);
                 leg(on, hard, free, HIGH_B, legASwitches ? 0 : m, !legASwitches, -current);
+                int pulse = legASwitches ? HIGH_A : HIGH_B;
+                int hold = legASwitches ? LOW_B : LOW_A;
+                high[pulse] = m;
+                low[pulse + 1] = 1 - m;
+                high[hold] = m;
+                low[hold] = 1 - m;
                 return new ConductionPattern(on, hard, free, 2, rippleSwing(modulation), m,
-                        ripplePeriodFactor(modulation), m, highSideDuty(modulation, v));
+                        ripplePeriodFactor(modulation), m, highSideDuty(modulation, v), high, low,
+                        legASwitches ? 1.0 : -1.0, 0.0);
             }
             default:
                 throw new IllegalArgumentException("unknown modulation " + modulation);
         }
+    }
+
+    /**
+     * Mean square of one position's channel current times its on-fraction, A² (what R_DS(on) turns into a
+     * conduction loss): the exact ripple moments of the intervals the channel is on in, less the dead times
+     * of a freewheeling position, which fall at the ripple's two extremes (every switching leg commutates
+     * once at the waveform's maximum and once at its minimum). For a triangular ripple this is
+     * on-fraction × I_rms²; with an exponential one the channel that is on while the current is higher
+     * carries more. {@code meanSquare} is the motor's I_rms² (it may average the waveform over a speed ramp);
+     * the interval moments redistribute it from the waveform at this pattern's voltage.
+     *
+     * @param position   {@link #HIGH_A} … {@link #LOW_B}
+     * @param current    average motor current I, A (positive from leg A to leg B)
+     * @param meanSquare motor I_rms², A²
+     * @param waveform   the ripple at this pattern's voltage ({@link PwmRipple#waveform})
+     */
+    public double channelSquare(int position, double current, double meanSquare, RippleWaveform waveform) {
+        double high = highShare[position];
+        double low = lowShare[position];
+        double s = rippleSign * current;
+        double value = (high + low) * (meanSquare - waveform.variance())
+                + high * (2 * s * waveform.highIntervalMean() + waveform.highIntervalSquare())
+                + low * (2 * s * waveform.lowIntervalMean() + waveform.lowIntervalSquare());
+        if (freewheeling[position] > 0 && deadFraction > 0) {
+            double atMax = current + rippleSign * waveform.highDeviation();
+            double atMin = current + rippleSign * waveform.lowDeviation();
+            value -= deadFraction * (atMax * atMax + atMin * atMin);
+        }
+        return Math.max(0.0, value);
+    }
+
+    /**
+     * Mean magnitude of the current a freewheeling body diode carries through its leg's two dead times, A:
+     * one falls at the ripple's maximum, the other at its minimum, so it is their mean, |I| for a triangle.
+     */
+    public double freewheelingCurrent(double current, RippleWaveform waveform) {
+        return (Math.abs(current + rippleSign * waveform.highDeviation())
+                + Math.abs(current + rippleSign * waveform.lowDeviation())) / 2;
     }
 
     /** One leg: high-side duty, whether it switches, and the current leaving its midpoint. */

@@ -12,7 +12,9 @@ package dev.yoke.physics;
  *
  * <p>The mean square of the deviation is integrated in closed form over both exponential pieces,
  * so the RMS stays exact when L/R is comparable to the period (the triangular I² + ΔI²/12 is only
- * its τ ≫ T_p limit, used here when T_p/τ &lt; 10⁻³ where the closed form would lose digits).
+ * its τ ≫ T_p limit, used here when T_p/τ &lt; 10⁻³ where the closed form would lose digits). The same
+ * integrals, kept per interval, give the mean and mean square of the deviation over the high and the low
+ * interval separately: what each switch of the bridge carries.
  */
 public final class PwmRipple {
 
@@ -43,13 +45,15 @@ public final class PwmRipple {
         double on = d * period;
         double off = period - on;
         if (swing == 0 || on <= 0 || off <= 0) {
-            return new RippleWaveform(0, 0, 0, 0);
+            return RippleWaveform.NONE;
         }
         double tau = inductance / resistance;
         if (!(resistance > 0) || period / tau < TRIANGULAR_LIMIT) {
             double pp = swing * d * (1 - d) * period / inductance;
             // Triangle: the lowest point is at the end of the off interval, −(pp/2), highest +pp/2.
-            return new RippleWaveform(pp, -pp / 2, pp / 2, pp * pp / 12.0);
+            // Each interval is one straight ramp between the extremes: mean 0, mean square pp²/12.
+            double square = pp * pp / 12.0;
+            return new RippleWaveform(pp, -pp / 2, pp / 2, square, 0, square, 0, square);
         }
         // Asymptotes of the deviation during each interval (relative to the average current).
         double high = (1 - d) * swing / resistance;
@@ -68,6 +72,10 @@ public final class PwmRipple {
         double sumOn = high * high * on + 2 * high * cOn * tau * gOn + cOn * cOn * tau / 2 * gOn * (1 + aOn);
         double sumOff = low * low * off + 2 * low * cOff * tau * gOff + cOff * cOff * tau / 2 * gOff * (1 + aOff);
         double variance = Math.max(0.0, (sumOn + sumOff) / period);
-        return new RippleWaveform(pp, yMin, yMax, variance);
+        // First moments of each exponential piece: ∫(a + c·e^(−t/τ))dt = a·t + c·τ·(1 − e^(−t/τ)).
+        double meanOn = (high * on + cOn * tau * gOn) / on;
+        double meanOff = (low * off + cOff * tau * gOff) / off;
+        return new RippleWaveform(pp, yMin, yMax, variance, meanOn, Math.max(0.0, sumOn / on), meanOff,
+                Math.max(0.0, sumOff / off));
     }
 }

@@ -104,4 +104,87 @@ class ConductionPatternTest {
             assertEquals(1.0, legBusy, 1e-12, "leg of " + ConductionPattern.POSITION_NAMES[high]);
         }
     }
+
+    static Stream<Arguments> shares() {
+        return Stream.of(
+                // modulation, V/Vbus, ripple sign, high-interval shares HA LA HB LB, low-interval shares
+                Arguments.of(Modulation.BIPOLAR, 0.4, 1, "0.7 0 0 0.7", "0 0.3 0.3 0"),
+                Arguments.of(Modulation.BIPOLAR, -0.4, 1, "0.3 0 0 0.3", "0 0.7 0.7 0"),
+                Arguments.of(Modulation.UNIPOLAR, 0.4, 1, "0.4 0 0 0.4", "0.3 0.3 0.3 0.3"),
+                Arguments.of(Modulation.UNIPOLAR, -0.4, -1, "0 0.4 0.4 0", "0.3 0.3 0.3 0.3"),
+                Arguments.of(Modulation.SIGN_MAGNITUDE, 0.4, 1, "0.4 0 0 0.4", "0 0.6 0 0.6"),
+                Arguments.of(Modulation.SIGN_MAGNITUDE, -0.4, -1, "0 0.4 0.4 0", "0 0.6 0 0.6"));
+    }
+
+    /**
+     * Which switches are on while the output sits at each level of its rectangular voltage (Mohan, Undeland
+     * &amp; Robbins, ch. 7, from memory): bipolar ±V_bus by diagonal pairs; unipolar two pulses per switching
+     * period by the leg whose duty exceeds ½ and two zero intervals of (1 − m)/2, both high or both low;
+     * sign-magnitude the switching leg's high switch for the pulse, its low switch for the zero, the other leg's
+     * low switch throughout. With V &lt; 0 the pulse is −V_bus: the waveform is upside down (sign −1).
+     */
+    @ParameterizedTest(name = "{0} v={1}")
+    @MethodSource("shares")
+    void intervalSharesFollowTheOutputLevels(Modulation m, double v, int sign, String high, String low) {
+        ConductionPattern p = ConductionPattern.of(m, v, 3.0);
+        double[] expectedHigh = Arrays.stream(high.split(" ")).mapToDouble(Double::parseDouble).toArray();
+        double[] expectedLow = Arrays.stream(low.split(" ")).mapToDouble(Double::parseDouble).toArray();
+        assertEquals(sign, p.rippleSign());
+        for (int i = 0; i < ConductionPattern.POSITIONS; i++) {
+            String name = ConductionPattern.POSITION_NAMES[i];
+            assertEquals(expectedHigh[i], p.highShare()[i], 1e-12, name + " high");
+            assertEquals(expectedLow[i], p.lowShare()[i], 1e-12, name + " low");
+            assertEquals(p.onFraction(i), p.highShare()[i] + p.lowShare()[i], 1e-12, name + " on-fraction");
+        }
+    }
+
+    /**
+     * Law (Kirchhoff's current law at each leg): at every instant the motor current flows through exactly one
+     * channel of each leg, or through the freewheeling diode during a dead time. So over a period the two
+     * channels' mean squares and the diode's share add up to the motor's I_rms², for any ripple shape: here an
+     * exponential one (L/R = 0.7 period) and the triangular limit, in all four quadrants.
+     */
+    @ParameterizedTest
+    @MethodSource("table")
+    void eachLegCarriesTheWholeMeanSquare(Modulation m, double v, int sign) {
+        double current = sign * 3.0;
+        double deadFraction = 500e-9 * 20e3;
+        for (double tauPeriods : new double[] {0.7, 1e4}) {
+            ConductionPattern p = ConductionPattern.of(m, v, current, deadFraction);
+            double period = p.ripplePeriodFactor() / 20e3;
+            RippleWaveform w = PwmRipple.waveform(p.rippleSwing() * 24, 2.0, 2.0 * tauPeriods * period,
+                    p.rippleOnFraction(), period);
+            double meanSquare = current * current + w.variance();
+            double atMax = current + p.rippleSign() * w.highDeviation();
+            double atMin = current + p.rippleSign() * w.lowDeviation();
+            for (int high : new int[] {ConductionPattern.HIGH_A, ConductionPattern.HIGH_B}) {
+                double diode = deadFraction * (atMax * atMax + atMin * atMin)
+                        * (p.freewheeling(high) + p.freewheeling(high + 1));
+                double sum = p.channelSquare(high, current, meanSquare, w)
+                        + p.channelSquare(high + 1, current, meanSquare, w) + diode;
+                assertEquals(meanSquare, sum, meanSquare * 1e-12, "leg of " + ConductionPattern.POSITION_NAMES[high]
+                        + " at L/R = " + tauPeriods + " periods");
+            }
+        }
+    }
+
+    /**
+     * With a triangular ripple (L/R ≫ period) both intervals hold the same mean square, so each channel's share
+     * is its on-fraction × I_rms² (the textbook conduction loss, Mohan, Undeland &amp; Robbins, ch. 2, from
+     * memory) and a freewheeling diode carries |I| at its dead times.
+     */
+    @ParameterizedTest
+    @MethodSource("table")
+    void triangularRippleGivesOnFractionTimesMeanSquare(Modulation m, double v, int sign) {
+        double current = sign * 3.0;
+        ConductionPattern p = ConductionPattern.of(m, v, current);
+        RippleWaveform w = PwmRipple.waveform(p.rippleSwing() * 24, 1e-5, 1e-3, p.rippleOnFraction(),
+                p.ripplePeriodFactor() / 20e3);
+        double meanSquare = current * current + w.variance();
+        for (int i = 0; i < ConductionPattern.POSITIONS; i++) {
+            assertEquals(p.onFraction(i) * meanSquare, p.channelSquare(i, current, meanSquare, w), 1e-9,
+                    ConductionPattern.POSITION_NAMES[i]);
+        }
+        assertEquals(Math.abs(current), p.freewheelingCurrent(current, w), 1e-12);
+    }
 }

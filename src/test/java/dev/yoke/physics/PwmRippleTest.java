@@ -82,6 +82,8 @@ class PwmRippleTest {
         double max = 0;
         double sum2 = 0;
         double sum = 0;
+        double highSum = 0;
+        double highSum2 = 0;
         for (int p = 0; p < periods; p++) {
             boolean last = p == periods - 1;
             min = Double.POSITIVE_INFINITY;
@@ -94,8 +96,14 @@ class PwmRippleTest {
                     // Exact integral of the exponential over the step for the mean and mean square.
                     double c = y - target;
                     double g = -Math.expm1(-dt / tau);
-                    sum += target * dt + c * tau * g;
-                    sum2 += target * target * dt + 2 * target * c * tau * g + c * c * tau / 2 * g * (2 - g);
+                    double first = target * dt + c * tau * g;
+                    double second = target * target * dt + 2 * target * c * tau * g + c * c * tau / 2 * g * (2 - g);
+                    sum += first;
+                    sum2 += second;
+                    if (t < duty * period) {
+                        highSum += first;
+                        highSum2 += second;
+                    }
                     min = Math.min(min, Math.min(y, next));
                     max = Math.max(max, Math.max(y, next));
                 }
@@ -109,6 +117,13 @@ class PwmRippleTest {
         assertEquals(variance, w.variance(), w.variance() * 1e-6);
         assertEquals(min - mean, w.lowDeviation(), w.peakToPeak() * 1e-6);
         assertTrue(Math.abs(mean) < w.peakToPeak() * 1e-6, "deviation averages to zero");
+        // The same stepped solution split at the voltage step: the moments of each interval.
+        double high = duty * period;
+        double low = period - high;
+        assertEquals(highSum / high, w.highIntervalMean(), w.peakToPeak() * 1e-6);
+        assertEquals(highSum2 / high, w.highIntervalSquare(), w.variance() * 1e-6);
+        assertEquals((sum - highSum) / low, w.lowIntervalMean(), w.peakToPeak() * 1e-6);
+        assertEquals((sum2 - highSum2) / low, w.lowIntervalSquare(), w.variance() * 1e-6);
     }
 
     /** Law: no switching (δ = 0 or 1) means no ripple. */
