@@ -40,6 +40,8 @@ for run in $(seq 1 "$runs"); do
         fi
         if printf '%s' "$screen" | grep -q -e '(Esc stops)' -e 'ranked '; then
             ranking=$t
+            # A poll can catch the shortlist drawn before its footer: it was painted all the same.
+            paint=${paint:-$t}
         fi
         tries=$((tries + 1))
     done

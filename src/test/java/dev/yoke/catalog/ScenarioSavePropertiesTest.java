@@ -239,8 +239,11 @@ class ScenarioSavePropertiesTest {
                     // the profile first, segments without blank lines and with quoted labels, CRLF line ends
                     reordered(commented).replace("\n\n    -", "\n    -").replace("label: hold", "label: \"hold\"")
                             .replace("\n", "\r\n"),
-                    // a segment list not at the end of the file, with a comment after its last item
-                    reordered(commented) + "  # trailing note on the bench\n"));
+                    // a segment list not at the end of the file, with a comment after its last item, and a
+                    // key with nothing after it (it loads as absent: speed_end follows speed_start)
+                    reordered(commented).replace("      speed_start: 0 rad/s\n      torque: 1.5 N*m",
+                            "      speed_start: 0 rad/s\n      speed_end:\n      torque: 1.5 N*m")
+                            + "  # trailing note on the bench\n"));
             for (String demo : List.of("arm-joint.yaml", "conveyor.yaml", "rover-wheel.yaml")) {
                 files.add(Files.readString(Path.of("demo-data", demo)));
             }
