@@ -51,6 +51,7 @@ import org.junit.jupiter.api.function.Executable;
  * engine gets that from the ripple's interval moments, and the diode's current from the ripple's extremes. The inductor
  * starts at the mean current at t = 0, the middle of an off interval where a triangular ripple crosses its mean,
  * and 20 periods pass before the 4 measured ones: the start-up error left is below 0.03 % of the current.
+ * The timestep is at most 1/1000 of a period (Gear integration); at 1/4000 no energy moves by more than 0.002 %.
  */
 class BridgeConductionNgspiceTest {
 
