@@ -252,6 +252,54 @@ public record ConductionPattern(
                 + Math.abs(current + rippleSign * waveform.lowDeviation())) / 2;
     }
 
+    /**
+     * Current in a position's forward direction (drain to source) at its turn-on, clamped at 0, A: what the V·I
+     * overlap of a hard turn-on sees. 0 for a position whose leg does not switch.
+     *
+     * <p>Each edge of a switching leg turns one switch off and, after the dead time, its partner on. If the leg
+     * current at that instant flows forward in the switch turning on, its partner's body diode has been carrying
+     * it and the turn-on is hard (the diode is reverse-biased while the channel takes the current at full
+     * voltage); if it flows forward in the switch turning off, that turn-off is hard and the partner turns on
+     * softly onto its own body diode (clamped inductive switching, Erickson &amp; Maksimović, <i>Fundamentals of
+     * Power Electronics</i>, 2nd ed., ch. 4, from memory). So each edge charges exactly one hard event, and
+     * {@link #turnOnCurrent} and {@link #turnOffCurrent} are the forward current at the edge, clamped at 0.
+     *
+     * <p>Which extreme of the ripple an edge sees: the output voltage (leg A minus leg B) steps up when leg A's
+     * high switch or leg B's low switch turns on and down when leg A's low or leg B's high switch turns on, and
+     * the current reaches its minimum where the output steps up and its maximum where it steps down (the R-L
+     * current rises while the output is at its higher level). With continuous current the hard switch therefore
+     * turns on at the valley of its current and off at the peak. When the current crosses zero within the
+     * period the valley edge reverses: the hard switch's turn-on is soft (0 here) and its partner turns off hard
+     * instead, with that reversed current; the ½·C_oss·V² and Q_rr·V terms stay charged to the nominal hard
+     * switch ({@link #hardSwitching(int)}), which overstates a soft turn-on's loss (conservative).
+     *
+     * @param position {@link #HIGH_A} … {@link #LOW_B}
+     * @param current  average motor current I, A (positive from leg A to leg B)
+     * @param waveform the ripple at this pattern's voltage ({@link PwmRipple#waveform})
+     */
+    public double turnOnCurrent(int position, double current, RippleWaveform waveform) {
+        return edgeCurrent(position, true, current, waveform);
+    }
+
+    /** Current in a position's forward direction at its turn-off, clamped at 0, A (see {@link #turnOnCurrent}). */
+    public double turnOffCurrent(int position, double current, RippleWaveform waveform) {
+        return edgeCurrent(position, false, current, waveform);
+    }
+
+    private double edgeCurrent(int position, boolean turnOn, double current, RippleWaveform waveform) {
+        int high = position & ~1;
+        if (hardSwitching[high] + hardSwitching[high + 1] == 0) {
+            return 0.0; // a leg that does not switch makes no edges
+        }
+        boolean forwardWithMotorCurrent = (high == HIGH_A) == (position == high); // HA and LB carry +I forward
+        boolean outputStepsUp = forwardWithMotorCurrent == turnOn;
+        double first = current + rippleSign * waveform.highDeviation();
+        double second = current + rippleSign * waveform.lowDeviation();
+        double atEdge = outputStepsUp ? Math.min(first, second) : Math.max(first, second);
+        double forward = forwardWithMotorCurrent ? atEdge : -atEdge;
+        return Math.max(0.0, forward);
+    }
+
     /** One leg: high-side duty, whether it switches, and the current leaving its midpoint. */
     private static void leg(double[] on, double[] hard, double[] free, int high, double highDuty,
             boolean switching, double legCurrent) {

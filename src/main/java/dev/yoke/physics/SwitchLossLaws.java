@@ -21,6 +21,30 @@ public final class SwitchLossLaws {
         return 0.5 * voltage * Math.abs(current) * (turnOnTime + turnOffTime) * frequency;
     }
 
+    /**
+     * Linear V·I overlap of one hard turn-on at current I_on and one hard turn-off at I_off per period:
+     * ½·V·f·(I_on·t_on + I_off·t_off), W. With a ripple the two edges see different currents: in continuous
+     * conduction the hard switch turns on at the valley of its current and off at the peak (clamped inductive
+     * switching, Erickson &amp; Maksimović, ch. 4, from memory; device loss estimates with separate turn-on and
+     * turn-off currents are common practice). Equal currents give {@link #hardSwitching(double, double, double,
+     * double, double)}.
+     */
+    public static double hardSwitching(double voltage, double turnOnCurrent, double turnOnTime,
+            double turnOffCurrent, double turnOffTime, double frequency) {
+        return hardTurnOn(voltage, turnOnCurrent, turnOnTime, frequency)
+                + hardTurnOff(voltage, turnOffCurrent, turnOffTime, frequency);
+    }
+
+    /** V·I overlap of one hard turn-on per period at current I_on: ½·V·|I_on|·t_on·f, W. */
+    public static double hardTurnOn(double voltage, double turnOnCurrent, double turnOnTime, double frequency) {
+        return 0.5 * voltage * Math.abs(turnOnCurrent) * turnOnTime * frequency;
+    }
+
+    /** V·I overlap of one hard turn-off per period at current I_off: ½·V·|I_off|·t_off·f, W. */
+    public static double hardTurnOff(double voltage, double turnOffCurrent, double turnOffTime, double frequency) {
+        return 0.5 * voltage * Math.abs(turnOffCurrent) * turnOffTime * frequency;
+    }
+
     /** Output capacitance discharged in the channel at each hard turn-on: ½·C_oss·V²·f, W. */
     public static double outputCapacitance(double capacitance, double voltage, double frequency) {
         return 0.5 * capacitance * voltage * voltage * frequency;

@@ -187,4 +187,55 @@ class ConductionPatternTest {
         }
         assertEquals(Math.abs(current), p.freewheelingCurrent(current, w), 1e-12);
     }
+
+    /**
+     * Hard edges with continuous current: the hard switch turns on at the valley of its current and off at the
+     * peak, since the current grows while it conducts (the buck converter's switch current, Erickson &amp;
+     * Maksimović, <i>Fundamentals of Power Electronics</i>, ch. 2 and 4, from memory); its partner's edges are
+     * soft (0). With a triangular ripple the valley and peak are |I| ∓ ΔI/2. 1e-12 A: the ripple's own
+     * rounding. The ngspice check of the same assignment is {@code engine.BridgeConductionNgspiceTest}.
+     */
+    @ParameterizedTest
+    @MethodSource("table")
+    void hardSwitchTurnsOnAtTheValleyAndOffAtThePeak(Modulation m, double v, int sign, String on, String hard) {
+        double current = sign * 3.0;
+        ConductionPattern p = ConductionPattern.of(m, v, current);
+        RippleWaveform w = PwmRipple.waveform(p.rippleSwing() * 24, 1e-5, 1e-3, p.rippleOnFraction(),
+                p.ripplePeriodFactor() / 20e3);
+        double half = w.peakToPeak() / 2;
+        List<String> hardNames = Arrays.asList(hard.split(" "));
+        for (int i = 0; i < ConductionPattern.POSITIONS; i++) {
+            String name = ConductionPattern.POSITION_NAMES[i];
+            boolean isHard = hardNames.contains(name);
+            assertEquals(isHard ? 3.0 - half : 0.0, p.turnOnCurrent(i, current, w), 1e-12, name + " turn-on");
+            assertEquals(isHard ? 3.0 + half : 0.0, p.turnOffCurrent(i, current, w), 1e-12, name + " turn-off");
+        }
+    }
+
+    /**
+     * A ripple that crosses zero: at the valley edge the current flows the other way, so the hard switch turns
+     * on softly onto its own body diode and its partner turns off hard with the reversed current (common
+     * practice: zero-voltage turn-on of a synchronous leg with reversing current). Law: every edge of a
+     * switching leg charges exactly one hard event, so the leg's turn-on and turn-off currents add up to
+     * |valley| + peak. 1e-12 A: rounding.
+     */
+    @ParameterizedTest
+    @MethodSource("table")
+    void aReversingCurrentMovesTheValleyEdgeToThePartnersTurnOff(Modulation m, double v, int sign) {
+        double current = sign * 0.5;
+        ConductionPattern p = ConductionPattern.of(m, v, current);
+        RippleWaveform w = PwmRipple.waveform(p.rippleSwing() * 24, 1e-5, 1e-4, p.rippleOnFraction(),
+                p.ripplePeriodFactor() / 20e3);
+        double half = w.peakToPeak() / 2;
+        double legs = 0;
+        double hardOn = 0;
+        for (int i = 0; i < ConductionPattern.POSITIONS; i++) {
+            legs += p.turnOnCurrent(i, current, w) + p.turnOffCurrent(i, current, w);
+            hardOn += p.hardSwitching(i) * p.turnOnCurrent(i, current, w);
+        }
+        int switchingLegs = m == Modulation.SIGN_MAGNITUDE ? 1 : 2;
+        assertEquals(true, half > 0.5, "the ripple must cross zero for this check");
+        assertEquals(switchingLegs * ((half - 0.5) + (0.5 + half)), legs, 1e-12, "every edge once");
+        assertEquals(0.0, hardOn, "soft turn-on of the hard switch");
+    }
 }

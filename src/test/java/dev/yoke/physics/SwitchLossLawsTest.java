@@ -17,6 +17,37 @@ class SwitchLossLawsTest {
         assertEquals(3.0, SwitchLossLaws.hardSwitching(48, -10, 100e-9, 150e-9, 50e3), 1e-12);
     }
 
+    /**
+     * Equal edge times and a symmetric (triangular) ripple: the valley and the peak average to the mean current,
+     * (I − ΔI/2 + I + ΔI/2)/2 = I, so ½·V·f·(I_on·t + I_off·t) = ½·V·I·2t·f, the mean-current law above
+     * (Mohan, Undeland &amp; Robbins, eq. 2-6, from memory). Our numbers: 48 V, 10 A ± 2 A, 100 ns each, 50 kHz:
+     * ½·48·50e3·(8 + 12)·100e-9 = 2.4 W. Exact arithmetic up to rounding.
+     */
+    @Test
+    void equalEdgeTimesWithASymmetricRippleGiveTheMeanCurrentLoss() {
+        double mean = SwitchLossLaws.hardSwitching(48, 10, 100e-9, 100e-9, 50e3);
+        assertEquals(2.4, mean, 1e-12);
+        assertEquals(mean, SwitchLossLaws.hardSwitching(48, 8, 100e-9, 12, 100e-9, 50e3), 1e-12);
+    }
+
+    /**
+     * A slower turn-off at the ripple's peak. With I_on = I − ΔI/2 and I_off = I + ΔI/2 (hand algebra):
+     * ½·V·f·(I_on·t_on + I_off·t_off) = ½·V·f·I·(t_on + t_off) + ½·V·f·(t_off − t_on)·ΔI/2,
+     * the mean-current value plus ½·V·f·(t_off − t_on)·ΔI/2. Our numbers: 48 V, 10 A, ΔI = 4 A, 100 ns on,
+     * 300 ns off, 50 kHz: 4.8 W + ½·48·50e3·200e-9·2 = 4.8 W + 0.48 W = 5.28 W. Exact arithmetic up to rounding.
+     */
+    @Test
+    void slowerTurnOffAtThePeakAddsHalfTheRippleTimesTheTimeDifference() {
+        double mean = SwitchLossLaws.hardSwitching(48, 10, 100e-9, 300e-9, 50e3);
+        double edges = SwitchLossLaws.hardSwitching(48, 8, 100e-9, 12, 300e-9, 50e3);
+        assertEquals(4.8, mean, 1e-12);
+        assertEquals(mean + 0.5 * 48 * 50e3 * (300e-9 - 100e-9) * 4 / 2, edges, 1e-12);
+        assertEquals(5.28, edges, 1e-12);
+        // The two edges add up: each is its own half of the overlap law.
+        assertEquals(edges, SwitchLossLaws.hardTurnOn(48, 8, 100e-9, 50e3)
+                + SwitchLossLaws.hardTurnOff(48, 12, 300e-9, 50e3), 1e-15);
+    }
+
     /** Energy in a charged capacitor ½CV² (any circuits text): 1 nF at 48 V at 50 kHz is 57.6 mW. */
     @Test
     void outputCapacitanceLossIsCapacitorEnergyTimesFrequency() {
