@@ -93,8 +93,15 @@ public final class DriveEvaluator implements PairingEvaluator {
     }
 
     /** Temperature-independent loss of one cell, W. */
-    static double otherLoss(SwitchConstants s, int fi, double hard, double hardCurrent, double freeCurrent) {
-        return hard * s.fixedHardLoss[fi] + hardCurrent * s.edgeLossPerAmp[fi] + freeCurrent * s.diodeLossPerAmp[fi];
+    static double otherLoss(SwitchConstants s, int fi, double hard, double turnOnCurrent, double turnOffCurrent,
+            double freeCurrent) {
+        return hard * s.fixedHardLoss[fi] + turnOnCurrent * s.turnOnLossPerAmp[fi]
+                + turnOffCurrent * s.turnOffLossPerAmp[fi] + freeCurrent * s.diodeLossPerAmp[fi];
+    }
+
+    /** V·I overlap loss of one cell's hard edges, W ({@link dev.yoke.physics.SwitchLossLaws#hardSwitching}). */
+    static double edgeLoss(SwitchConstants s, int fi, double turnOnCurrent, double turnOffCurrent) {
+        return turnOnCurrent * s.turnOnLossPerAmp[fi] + turnOffCurrent * s.turnOffLossPerAmp[fi];
     }
 
     @Override
@@ -103,7 +110,8 @@ public final class DriveEvaluator implements PairingEvaluator {
         SwitchConstants s = switches[switchIndex];
         int fi = plan.frequencyIndex;
         double fixed = s.fixedHardLoss[fi];
-        double edge = s.edgeLossPerAmp[fi];
+        double edgeOn = s.turnOnLossPerAmp[fi];
+        double edgeOff = s.turnOffLossPerAmp[fi];
         double diode = s.diodeLossPerAmp[fi];
         double factor = s.runawayFactor;
         double rAmbient = s.rAmbient;
@@ -124,7 +132,8 @@ public final class DriveEvaluator implements PairingEvaluator {
             boolean pieceRunaway = false;
             for (int end = pieceEnd[k]; c < end; c += MotorSidePlan.CELL) {
                 double a = cells[c];
-                double b = cells[c + 1] * fixed + cells[c + 2] * edge + cells[c + 3] * diode;
+                double b = cells[c + 1] * fixed + cells[c + 2] * edgeOn + cells[c + 3] * edgeOff
+                        + cells[c + 4] * diode;
                 double stability = 1.0 - factor * a;
                 double loss;
                 if (stability > 0) {
@@ -133,7 +142,7 @@ public final class DriveEvaluator implements PairingEvaluator {
                     pieceRunaway = true;
                     loss = cellLoss(s, a, b);
                 }
-                bridge += cells[c + 4] * loss;
+                bridge += cells[c + 5] * loss;
                 if (loss > lossMax) {
                     lossMax = loss;
                 }
@@ -333,12 +342,13 @@ public final class DriveEvaluator implements PairingEvaluator {
             for (int p = 0; p < 4; p++) {
                 int c = 4 * k + p;
                 double a = plan.conduction[c];
-                double b = otherLoss(s, fi, plan.hard[c], plan.hardCurrent[c], plan.freeCurrent[c]);
+                double b = otherLoss(s, fi, plan.hard[c], plan.turnOnCurrent[c], plan.turnOffCurrent[c],
+                        plan.freeCurrent[c]);
                 double cell = cellLoss(s, a, b);
                 double tj = cellJunction(s, a, cell, ambient);
                 double[] l = loss[p];
                 l[0] += t * (cell - b);
-                l[1] += t * plan.hardCurrent[c] * s.edgeLossPerAmp[fi];
+                l[1] += t * edgeLoss(s, fi, plan.turnOnCurrent[c], plan.turnOffCurrent[c]);
                 l[2] += t * plan.hard[c] * s.capacitanceLoss[fi];
                 l[3] += t * plan.freeCurrent[c] * s.diodeLossPerAmp[fi];
                 l[4] += t * plan.hard[c] * s.recoveryLoss[fi];

@@ -68,12 +68,20 @@ final class MotorSidePlan implements PairingEvaluator.MotorSide {
     final double[] conduction;
     /** Per piece and position: fraction of the piece the position hard-switches. */
     final double[] hard;
-    /** Per piece and position: hard fraction × |I| (A). */
-    final double[] hardCurrent;
+    /**
+     * Per piece and position: the current at the position's hard turn-on and at its hard turn-off, A, each in the
+     * switch's forward direction and clamped at 0 ({@link ConductionPattern#turnOnCurrent}), weighted by the
+     * share of the piece (continuous current: the ripple's valley and peak).
+     */
+    final double[] turnOnCurrent;
+    final double[] turnOffCurrent;
     /** Per piece and position: freewheeling fraction × the mean |I| at the dead times (the ripple's extremes), A. */
     final double[] freeCurrent;
-    /** Doubles per fast-path cell: conduction, hard, hard × |I|, freewheel × |I|, cycle weight × multiplicity. */
-    static final int CELL = 5;
+    /**
+     * Doubles per fast-path cell: conduction, hard, turn-on current, turn-off current, freewheel × |I|,
+     * cycle weight × multiplicity.
+     */
+    static final int CELL = 6;
     /** Fast-path cells: for each piece, for each distinct busy position, {@link #CELL} doubles. */
     final double[] cells;
     /** Offset in {@link #cells} just past each piece's cells. */
@@ -139,7 +147,8 @@ final class MotorSidePlan implements PairingEvaluator.MotorSide {
         switchingCount = new double[n];
         conduction = new double[4 * n];
         hard = new double[4 * n];
-        hardCurrent = new double[4 * n];
+        turnOnCurrent = new double[4 * n];
+        turnOffCurrent = new double[4 * n];
         freeCurrent = new double[4 * n];
 
         Modulation modulation = bench.modulation();
@@ -372,14 +381,16 @@ final class MotorSidePlan implements PairingEvaluator.MotorSide {
         for (int k = 0; k < n; k++) {
             for (int j = 0; j < count; j++) {
                 int at = 4 * k + rep[j];
-                if (conduction[at] == 0 && hard[at] == 0 && freeCurrent[at] == 0) {
+                if (conduction[at] == 0 && hard[at] == 0 && turnOnCurrent[at] == 0 && turnOffCurrent[at] == 0
+                        && freeCurrent[at] == 0) {
                     continue;
                 }
                 packed[c] = conduction[at];
                 packed[c + 1] = hard[at];
-                packed[c + 2] = hardCurrent[at];
-                packed[c + 3] = freeCurrent[at];
-                packed[c + 4] = weight[k] * mult[j];
+                packed[c + 2] = turnOnCurrent[at];
+                packed[c + 3] = turnOffCurrent[at];
+                packed[c + 4] = freeCurrent[at];
+                packed[c + 5] = weight[k] * mult[j];
                 c += CELL;
             }
             pieceEnd[k] = c;
@@ -390,7 +401,8 @@ final class MotorSidePlan implements PairingEvaluator.MotorSide {
     private boolean samePosition(int a, int b) {
         for (int k = 0; k < n; k++) {
             if (!close(conduction[4 * k + a], conduction[4 * k + b]) || !close(hard[4 * k + a], hard[4 * k + b])
-                    || !close(hardCurrent[4 * k + a], hardCurrent[4 * k + b])
+                    || !close(turnOnCurrent[4 * k + a], turnOnCurrent[4 * k + b])
+                    || !close(turnOffCurrent[4 * k + a], turnOffCurrent[4 * k + b])
                     || !close(freeCurrent[4 * k + a], freeCurrent[4 * k + b])) {
                 return false;
             }
@@ -405,19 +417,20 @@ final class MotorSidePlan implements PairingEvaluator.MotorSide {
     /**
      * Adds one conduction pattern's coefficients, weighted by the share of the piece it holds for: each channel's
      * mean square from the exact ripple's interval moments, each freewheeling diode's current at the ripple's
-     * extremes ({@link ConductionPattern#channelSquare}, {@link ConductionPattern#freewheelingCurrent}).
+     * extremes ({@link ConductionPattern#channelSquare}, {@link ConductionPattern#freewheelingCurrent}), and the
+     * current at each hard edge ({@link ConductionPattern#turnOnCurrent}, {@link ConductionPattern#turnOffCurrent}).
      */
     private void addPattern(Modulation modulation, double voltageRatio, double deadFraction, RippleCache ripples,
             double r, double share, double ms, int base, int k) {
         ConductionPattern pattern = ConductionPattern.of(modulation, voltageRatio, current[k], deadFraction);
         RippleWaveform w = ripples.get(r, ConductionPattern.rippleOnFraction(modulation, voltageRatio));
         double i = current[k];
-        double absI = absCurrent[k];
         double diodeCurrent = pattern.freewheelingCurrent(i, w);
         for (int p = 0; p < 4; p++) {
             conduction[base + p] += share * pattern.channelSquare(p, i, ms, w);
             hard[base + p] += share * pattern.hardSwitching(p);
-            hardCurrent[base + p] += share * pattern.hardSwitching(p) * absI;
+            turnOnCurrent[base + p] += share * pattern.turnOnCurrent(p, i, w);
+            turnOffCurrent[base + p] += share * pattern.turnOffCurrent(p, i, w);
             freeCurrent[base + p] += share * pattern.freewheeling(p) * diodeCurrent;
         }
         switchingCount[k] += share * pattern.switchingCount();

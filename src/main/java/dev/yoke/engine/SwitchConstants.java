@@ -34,8 +34,12 @@ final class SwitchConstants {
     /** Per frequency: the C_oss and the Q_rr parts of {@link #fixedHardLoss}, W (the detailed breakdown). */
     final double[] capacitanceLoss;
     final double[] recoveryLoss;
-    /** Per frequency: V·I overlap loss per ampere of a hard-switching position, W/A. */
-    final double[] edgeLossPerAmp;
+    /**
+     * Per frequency: V·I overlap loss per ampere of current at a hard turn-on and at a hard turn-off, W/A
+     * (separate because the two edges see different currents and take different times).
+     */
+    final double[] turnOnLossPerAmp;
+    final double[] turnOffLossPerAmp;
     /** Per frequency: dead-time diode loss per ampere of a freewheeling position, W/A. */
     final double[] diodeLossPerAmp;
     /** Per frequency: gate-drive loss of one driven switch, W. */
@@ -66,7 +70,8 @@ final class SwitchConstants {
         fixedHardLoss = new double[nf];
         capacitanceLoss = new double[nf];
         recoveryLoss = new double[nf];
-        edgeLossPerAmp = new double[nf];
+        turnOnLossPerAmp = new double[nf];
+        turnOffLossPerAmp = new double[nf];
         diodeLossPerAmp = new double[nf];
         gateLossPerSwitch = new double[nf];
         double v = bench.busVoltage();
@@ -75,7 +80,8 @@ final class SwitchConstants {
             capacitanceLoss[i] = SwitchLossLaws.outputCapacitance(q.outputCapacitance(), v, f);
             recoveryLoss[i] = SwitchLossLaws.reverseRecovery(q.reverseRecoveryCharge(), v, f);
             fixedHardLoss[i] = capacitanceLoss[i] + recoveryLoss[i];
-            edgeLossPerAmp[i] = SwitchLossLaws.hardSwitching(v, 1.0, turnOnEdge, turnOffEdge, f);
+            turnOnLossPerAmp[i] = SwitchLossLaws.hardTurnOn(v, 1.0, turnOnEdge, f);
+            turnOffLossPerAmp[i] = SwitchLossLaws.hardTurnOff(v, 1.0, turnOffEdge, f);
             diodeLossPerAmp[i] = SwitchLossLaws.deadTimeDiode(q.diodeForwardVoltage(), 1.0, bench.deadTime(), f);
             gateLossPerSwitch[i] = SwitchLossLaws.gateDrive(q.gateCharge(), bench.gateDriveVoltage(), f);
         }

@@ -1,0 +1,91 @@
+package dev.yoke.engine;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import dev.yoke.engine.BridgeConductionNgspiceTest.Case;
+import dev.yoke.model.Catalog;
+import dev.yoke.model.Modulation;
+import dev.yoke.model.PowerSwitch;
+import dev.yoke.model.Scenario;
+import dev.yoke.physics.SwitchLossLaws;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+
+/**
+ * The engine's hard-switching V·I overlap ({@link DriveEvaluator#explain}) with the current at each edge: the
+ * hard switch turns on at the valley of the ripple and off at the peak. On the reference bench of
+ * {@link BridgeConductionNgspiceTest} (24 V, 20 kHz, 2 Ω, L/R = 1 period, so the ripple is large) with the
+ * bipolar output at V = 0, whose 50 % square wave makes the R-L ripple exactly symmetric about the mean for any
+ * L/R (half-wave symmetry): valley and peak are |I| ∓ ΔI/2.
+ */
+class HardEdgeLossTest {
+
+    private static final double BUS = 24;
+    private static final double F = 20e3;
+    /** Bipolar, V = 0 (d = ½), 4 A, L/R = 1 period: ΔI = (48 V / 2 Ω)·tanh(T/4τ) ≈ 5.9 A, valley 1.1 A, still continuous. */
+    private static final Case SYMMETRIC = new Case(Modulation.BIPOLAR, 0.0, 4.0, 1);
+
+    /** The reference switch with another Miller plateau (t_on ∝ 1/(12 V − plateau), t_off ∝ 1/plateau). */
+    private static PowerSwitch withPlateau(double plateau) {
+        PowerSwitch q = BridgeConductionNgspiceTest.powerSwitch();
+        return new PowerSwitch(q.id(), q.label(), q.packageName(), q.vdsMax(), q.idContinuous(), q.idPulsed(),
+                q.rdsOn(), q.rdsOnHot(), q.rdsOnHotTemp(), q.gateCharge(), q.gateSourceCharge(),
+                q.gateDrainCharge(), plateau, q.gateResistanceInternal(), q.outputCapacitance(),
+                q.diodeForwardVoltage(), q.reverseRecoveryCharge(), q.rthJunctionCase(), q.maxJunctionTemp(),
+                q.price());
+    }
+
+    private static SegmentResult explain(PowerSwitch q) {
+        Scenario scenario = BridgeConductionNgspiceTest.scenario(SYMMETRIC);
+        Catalog catalog = new Catalog(List.of(BridgeConductionNgspiceTest.motor(SYMMETRIC)), List.of(q));
+        return DriveEvaluator.of(scenario, catalog).explain(0, 0, 0, 0).segments().get(0);
+    }
+
+    private static SwitchConstants constants(PowerSwitch q) {
+        return new SwitchConstants(q, BridgeConductionNgspiceTest.scenario(SYMMETRIC).bench());
+    }
+
+    /**
+     * Equal edge times (plateau at half the 12 V drive): (I_valley + I_peak)/2 = I for a symmetric ripple, so the
+     * edge-current loss is exactly the mean-current law ½·V·|I|·(t_on + t_off)·f (Mohan, Undeland &amp; Robbins,
+     * eq. 2-6, from memory). 1e-6 relative: the reference winding still warms by a fraction of a millikelvin,
+     * leaving 2.4 µV across the motor and d = ½ + 5e-8, an asymmetry of that order (measured 1.2e-8).
+     */
+    @Test
+    void equalEdgeTimesGiveTheMeanCurrentLossWhenTheRippleIsSymmetric() {
+        PowerSwitch q = withPlateau(6.0);
+        SwitchConstants s = constants(q);
+        assertEquals(s.turnOnEdge, s.turnOffEdge, 1e-20, "equal edge times at half the drive");
+        SegmentResult y = explain(q);
+        assertTrue(y.currentRipplePp() > 4.0, "a large ripple, so that a wrong edge current would show");
+        double mean = SwitchLossLaws.hardSwitching(BUS, 4.0, s.turnOnEdge, s.turnOffEdge, F);
+        for (int p : new int[] {0, 3}) { // HA and LB hard-switch (I > 0, bipolar)
+            assertEquals(mean, y.switchLosses().get(p).switching(), 1e-6 * mean, "position " + p);
+        }
+    }
+
+    /**
+     * A slower turn-off (plateau 4.5 V: t_off = t_on·7.5/4.5): the hard switch turns off at the peak, so its loss
+     * rises above the mean-current value by ½·V·f·(t_off − t_on)·ΔI/2 (hand algebra in
+     * {@code SwitchLossLawsTest.slowerTurnOffAtThePeakAddsHalfTheRippleTimesTheTimeDifference}), with ΔI the
+     * engine's own peak-to-peak ripple (checked against ngspice in {@code PwmRippleNgspiceTest}). 1e-6 relative,
+     * as above.
+     */
+    @Test
+    void slowerTurnOffAtThePeakRaisesTheLossByHalfTheRippleTimesTheTimeDifference() {
+        PowerSwitch q = withPlateau(4.5);
+        SwitchConstants s = constants(q);
+        assertTrue(s.turnOffEdge > 1.5 * s.turnOnEdge, "turn-off clearly slower");
+        SegmentResult y = explain(q);
+        double mean = SwitchLossLaws.hardSwitching(BUS, 4.0, s.turnOnEdge, s.turnOffEdge, F);
+        double expected = mean + 0.5 * BUS * F * (s.turnOffEdge - s.turnOnEdge) * y.currentRipplePp() / 2;
+        assertTrue(expected > 1.05 * mean, "the effect is material here");
+        for (int p : new int[] {0, 3}) {
+            assertEquals(expected, y.switchLosses().get(p).switching(), 1e-6 * expected, "position " + p);
+        }
+        // The freewheeling switches make no hard edge.
+        assertEquals(0.0, y.switchLosses().get(1).switching(), 0.0);
+        assertEquals(0.0, y.switchLosses().get(2).switching(), 0.0);
+    }
+}
