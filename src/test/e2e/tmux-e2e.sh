@@ -33,18 +33,19 @@ capture() {
     printf '%s\n' "$now" > "$out/$1.txt"
 }
 
-# wait_for TEXT SECONDS: polls the screen until TEXT shows.
+# wait_for TEXT SECONDS [SESSION]: polls the screen (session e2e unless named) until TEXT shows.
 wait_for() {
+    session=${3:-e2e}
     tries=$(( $2 * 10 ))
     while [ "$tries" -gt 0 ]; do
-        if tm capture-pane -p -t e2e 2>/dev/null | grep -F -q -- "$1"; then
+        if tm capture-pane -p -t "$session" 2>/dev/null | grep -F -q -- "$1"; then
             return 0
         fi
         sleep 0.1
         tries=$(( tries - 1 ))
     done
-    tm capture-pane -p -t e2e > "$out/timeout.txt" 2>/dev/null || true
-    echo "tmux-e2e: '$1' did not appear within $2 s (screen in $out/timeout.txt)" >&2
+    tm capture-pane -p -t "$session" > "$out/timeout.txt" 2>/dev/null || true
+    echo "tmux-e2e: '$1' did not appear within $2 s in session $session (screen in $out/timeout.txt)" >&2
     exit 1
 }
 
@@ -104,18 +105,5 @@ profile: 3
 YAML
 tm new-session -d -s bad -x 120 -y 40 \
     "cd '$work' && TERM=xterm-256color LANG=C.UTF-8 LC_ALL= java -Djava.awt.headless=true -jar '$jar' open '$work/broken.yaml' --catalog '$project/catalog'; echo YOKE-EXIT=\$?; sleep 120"
-wait_bad() {
-    tries=300
-    while [ "$tries" -gt 0 ]; do
-        if tm capture-pane -p -t bad 2>/dev/null | grep -F -q -- "YOKE-EXIT="; then
-            return 0
-        fi
-        sleep 0.1
-        tries=$(( tries - 1 ))
-    done
-    tm capture-pane -p -t bad > "$out/timeout.txt" 2>/dev/null || true
-    echo "tmux-e2e: the broken scenario run did not end within 30 s" >&2
-    exit 1
-}
-wait_bad
+wait_for "YOKE-EXIT=" 30 bad
 tm capture-pane -p -t bad > "$out/08-load-error.txt"
