@@ -479,7 +479,7 @@ public final class Workbench implements ScreenLoop {
             ViewSettings v = view;
             pendingExport = viewWorker.submit(() -> {
                 backend.writeCsv(file, s, order, v);
-                return "wrote " + order.length + " rows to " + file;
+                return String.format(Locale.ROOT, "wrote %,d rows to %s", order.length, file);
             });
             showMessage("writing " + order.length + " rows to " + file + "...");
             return null;
