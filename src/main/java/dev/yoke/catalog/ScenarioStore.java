@@ -13,6 +13,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.Objects;
+import java.util.Optional;
 
 /**
  * Saves a scenario file. An existing file is edited in place ({@link ScenarioText}, through the same
@@ -74,6 +75,21 @@ public final class ScenarioStore {
     public static SavedScenario save(Scenario scenario, Path file, CatalogFile loadedAs)
             throws IOException, InputException, ChangedOnDiskException {
         return write(scenario, file, textFor(scenario, file, loadedAs));
+    }
+
+    /**
+     * Why saving {@code scenario} to {@code file} now would write the file's body anew (the
+     * comments below its top block dropped, kept only in the backup), or empty when the file would
+     * be edited in place or created. Reads the file and writes nothing, so that an editor can ask
+     * before such a save; the save itself reports what it did ({@link SavedScenario#bodyRewritten}).
+     */
+    public static Optional<String> rewriteNeeded(Scenario scenario, Path file) throws IOException {
+        try {
+            String why = textFor(scenario, file, null).rewrittenBecause();
+            return why.isEmpty() ? Optional.empty() : Optional.of(why);
+        } catch (ChangedOnDiskException changing) {
+            return Optional.empty(); // changing under us: the save will check again and say what it did
+        }
     }
 
     /**

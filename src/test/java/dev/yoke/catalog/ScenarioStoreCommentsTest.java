@@ -257,6 +257,10 @@ class ScenarioStoreCommentsTest {
                 + " torque: 1 N*m}]\n");
         Scenario edited = withSegments(ScenarioLoader.load(file).scenario(),
                 list -> list.add(new Segment("rest", 3, 0, 0, 0.2)));
+        String flow = Files.readString(file);
+        assertEquals(Optional.of("profile.segments is written in flow style [...]"),
+                ScenarioStore.rewriteNeeded(edited, file), "known before the save");
+        assertEquals(flow, Files.readString(file), "asking writes nothing");
         SavedScenario saved = ScenarioStore.save(edited, file);
         assertEquals(edited, saved.scenario());
         assertTrue(Files.readString(file).startsWith("# Invented machine for the scenario-save tests"));
@@ -269,6 +273,7 @@ class ScenarioStoreCommentsTest {
         Path file = commented();
         Scenario edited = withSegments(ScenarioLoader.load(file).scenario(),
                 list -> list.add(new Segment("rest", 3, 0, 0, 0.2)));
+        assertEquals(Optional.empty(), ScenarioStore.rewriteNeeded(edited, file));
         assertEquals(Optional.empty(), ScenarioStore.save(edited, file).bodyRewritten());
     }
 

@@ -31,8 +31,10 @@ import java.util.function.Consumer;
  * The scenario editor: the bench, its limits and the profile's scalars as a form, the profile's
  * segments as a table. Every valid change is passed to {@code onChange} when the user leaves the
  * changed field or cell (so half-typed values are not ranked); an invalid value is shown beside
- * its field and passed nowhere. F2 writes the file (atomically, keeping a backup); Esc closes,
- * asking first when the file is behind the screen.
+ * its field and passed nowhere. F2 writes the file (atomically, keeping a backup), editing it in
+ * place; when its layout does not allow that (segments written on one line), it asks first, since
+ * the body is then written anew and its comments are kept only in the backup. Esc closes, asking
+ * first when the file is behind the screen.
  */
 public final class ScenarioEditor extends EditorWindow {
 
@@ -166,21 +168,51 @@ public final class ScenarioEditor extends EditorWindow {
             return;
         }
         passOn();
-        try {
-            savedAs(s.get(), "", saver.save(s.get(), file));
-        } catch (ChangedOnDiskException e) {
-            askAboutChangedFile(s.get());
-        } catch (IOException | RuntimeException e) {
-            message = "Not saved: " + file + ": " + e.getMessage();
+        Optional<String> rewrite = saver.rewriteNeeded(s.get(), file);
+        if (rewrite.isPresent()) {
+            askBeforeRewriting(s.get(), rewrite.get());
+        } else {
+            write(s.get(), false);
         }
         refresh();
     }
 
+    /** Saves {@code scenario}; {@code warned}: the user already agreed to a body written anew. */
+    private void write(Scenario scenario, boolean warned) {
+        try {
+            savedAs(scenario, "", saver.save(scenario, file), warned);
+        } catch (ChangedOnDiskException e) {
+            askAboutChangedFile(scenario);
+        } catch (IOException | RuntimeException e) {
+            message = "Not saved: " + file + ": " + e.getMessage();
+        }
+    }
+
+    /** Asks before a save that would drop the comments in the file's body ({@code why}: what Yoke cannot edit in place). */
+    private void askBeforeRewriting(Scenario scenario, String why) {
+        String name = file.getFileName().toString();
+        LinkedHashMap<String, Runnable> answers = new LinkedHashMap<>();
+        answers.put("Save anyway", () -> {
+            write(scenario, true);
+            refresh();
+        });
+        answers.put("Back", () -> {
+            message = "Not saved: " + name + " is as it was; your edits are still here";
+            refresh();
+        });
+        ChoiceWindow.ask(gui, "Save writes the file anew", "Yoke cannot edit " + name + " in place (" + why
+                + "), so saving writes its body anew in Yoke's layout: the comment lines at the top stay,"
+                + " comments further down are dropped from " + name + " (the previous file, comments and all,"
+                + " is kept as " + name + ".bak). To keep them, go back, write that part one value per line"
+                + " (block style) in a text editor and open the scenario again. Save anyway?", answers, unicode);
+    }
+
     /**
      * Records a save and says so; when the file's body was written anew ({@code rewritten} says
-     * why), the user's comments inside it are gone from the file, so a notice says where they are.
+     * why), the user's comments inside it are gone from the file, so a notice says where they are,
+     * unless the user was {@code warned} before and chose to save.
      */
-    private void savedAs(Scenario scenario, String note, Optional<String> rewritten) {
+    private void savedAs(Scenario scenario, String note, Optional<String> rewritten, boolean warned) {
         saved = scenario;
         String name = file.getFileName().toString();
         if (rewritten.isEmpty()) {
@@ -188,6 +220,9 @@ public final class ScenarioEditor extends EditorWindow {
             return;
         }
         message = "Saved " + name + note + "; body written anew, its comments are only in " + name + ".bak";
+        if (warned) {
+            return; // the user was told before and chose to save
+        }
         LinkedHashMap<String, Runnable> ok = new LinkedHashMap<>();
         ok.put("OK", this::refresh);
         ChoiceWindow.ask(gui, "Saved; comments dropped", "Saved " + name + note + ", but Yoke could not edit it"
@@ -201,7 +236,7 @@ public final class ScenarioEditor extends EditorWindow {
         LinkedHashMap<String, Runnable> answers = new LinkedHashMap<>();
         answers.put("Overwrite", () -> {
             try {
-                savedAs(scenario, " over the other version", saver.overwrite(scenario, file));
+                savedAs(scenario, " over the other version", saver.overwrite(scenario, file), false);
             } catch (IOException | RuntimeException e) {
                 message = "Not saved: " + file + ": " + e.getMessage();
             }

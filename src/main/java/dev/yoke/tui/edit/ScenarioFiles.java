@@ -49,6 +49,15 @@ final class ScenarioFiles implements ScenarioSaver {
     }
 
     @Override
+    public Optional<String> rewriteNeeded(Scenario scenario, Path file) {
+        try {
+            return ScenarioStore.rewriteNeeded(scenario, file);
+        } catch (IOException unreadable) {
+            return Optional.empty(); // the save itself will fail and say why
+        }
+    }
+
+    @Override
     public Optional<String> overwrite(Scenario scenario, Path file) throws IOException {
         try {
             SavedScenario written = ScenarioStore.save(scenario, file);

@@ -20,6 +20,15 @@ public interface ScenarioSaver {
      */
     Optional<String> save(Scenario scenario, Path file) throws IOException, ChangedOnDiskException;
 
+    /**
+     * Why a save of {@code scenario} to {@code file} would write the file's body anew rather than
+     * edit it in place (its comments then survive only in the backup), or empty when it would not
+     * or cannot tell. Writes nothing.
+     */
+    default Optional<String> rewriteNeeded(Scenario scenario, Path file) {
+        return Optional.empty();
+    }
+
     /** Writes the file even if it changed meanwhile (that version becomes the backup); returns as {@link #save} does. */
     Optional<String> overwrite(Scenario scenario, Path file) throws IOException;
 }

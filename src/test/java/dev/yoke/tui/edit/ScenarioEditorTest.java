@@ -10,6 +10,7 @@ import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -194,6 +195,36 @@ class ScenarioEditorTest {
             assertTrue(screen.contains("PROFILE SEGMENTS"));
             assertTrue(screen.contains("F2 save"), "the key line is on screen");
             assertTrue(screen.contains("stop"), "every demo segment is on screen");
+        }
+    }
+
+    /**
+     * A save that wrote the file's body anew without the editor having asked (the file changed to
+     * such a layout after the check) is reported in a notice that names the backup.
+     */
+    @Test
+    void bodyWrittenAnewUnannouncedIsReportedAfterTheSave() throws Exception {
+        ScenarioSaver rewriting = new ScenarioSaver() {
+            @Override
+            public Optional<String> save(Scenario scenario, Path file) {
+                return overwrite(scenario, file);
+            }
+
+            @Override
+            public Optional<String> overwrite(Scenario scenario, Path file) {
+                saved.add(scenario);
+                return Optional.of("profile.segments is written in flow style [...]");
+            }
+        };
+        try (TerminalDriver t = new TerminalDriver(80, 24)) {
+            ScenarioEditor.open(t.gui, DemoScenario.conveyor(), FILE, passed::add, rewriting);
+            t.update().press(KeyType.F2);
+            String notice = t.text();
+            assertTrue(notice.contains("Saved; comments dropped"), notice);
+            assertTrue(notice.contains("conveyor.yaml.bak"), notice);
+            assertEquals(1, saved.size());
+            t.press(KeyType.Enter); // OK
+            assertTrue(t.text().contains("body written anew"), t.text());
         }
     }
 }
