@@ -214,7 +214,7 @@ public final class CatalogStore {
                 if (changes.isEmpty()) {
                     return;
                 }
-                writes.put(target, text.withFields(kind.listKey(), originalId, changes));
+                writes.put(target, text.withFields(kind.listKey(), originalId, changes, kind.keyOrder()));
             } else {
                 String targetText = Files.exists(target) ? checkedText(target) : newFileText(kind, "");
                 writes.put(target, CatalogText.parse(targetText).withItemAppended(kind.listKey(), kind.allFields(edited)));

@@ -145,8 +145,16 @@ final class CatalogText {
      * @throws IOException when the part is missing or written in a form Yoke does not edit
      */
     String withFields(String listKey, String id, List<FieldValue> fields) throws IOException {
+        return withFields(listKey, id, fields, List.of());
+    }
+
+    /**
+     * Like {@link #withFields(String, String, List)}, but a key the part lacks is placed after the
+     * nearest key before it in {@code keyOrder} that the part has, as {@link #withSectionFields} does.
+     */
+    String withFields(String listKey, String id, List<FieldValue> fields, List<String> keyOrder) throws IOException {
         MappingNode item = item(listKey, id).orElseThrow(() -> missing(listKey, id));
-        return withFields(item, listKey + " '" + id + "'", fields);
+        return withFields(item, listKey + " '" + id + "'", fields, keyOrder);
     }
 
     /**
@@ -165,11 +173,6 @@ final class CatalogText {
     String withItemFields(List<String> listPath, int index, List<FieldValue> fields, List<String> keyOrder)
             throws IOException {
         return withFields(itemAt(listPath, index), String.join(".", listPath) + " #" + (index + 1), fields, keyOrder);
-    }
-
-    /** Sets {@code fields} in {@code item} ({@code what} names it in messages). */
-    private String withFields(MappingNode item, String what, List<FieldValue> fields) throws IOException {
-        return withFields(item, what, fields, List.of());
     }
 
     /**

@@ -86,9 +86,10 @@ final class PartText<T> {
      * Keys whose default the loader derives from another key: absent from the file, they must be
      * written out when that key changes, or the part would load back different.
      */
-    private static final Map<String, String> DERIVED_FROM = Map.of(
-            "rds_on_hot", "rds_on",
-            "rds_on_hot_temp", "rds_on");
+    private static final Map<String, List<String>> DERIVED_FROM = Map.of(
+            "rds_on_hot", List.of("rds_on"),
+            // and the loader refuses a hot resistance without the temperature it was measured at
+            "rds_on_hot_temp", List.of("rds_on", "rds_on_hot"));
 
     private final PartKind kind;
     private final Function<T, String> id;
@@ -163,6 +164,14 @@ final class PartText<T> {
         return out.toString();
     }
 
+    /**
+     * Every key a part of this kind may spell, in table order, a field's other accepted spellings
+     * beside it: where a key the part lacks is placed when an edit adds it.
+     */
+    List<String> keyOrder() {
+        return bindings.stream().flatMap(b -> b.acceptedKeys().stream()).toList();
+    }
+
     /** Every field of a new part, in table order; empty optional text (label, package) is left out. */
     List<FieldValue> allFields(T part) {
         List<FieldValue> fields = new ArrayList<>();
@@ -180,22 +189,22 @@ final class PartText<T> {
      * The fields to write so that the file, which holds {@code before} with the keys
      * {@code keysInFile}, then holds {@code after}: the fields whose value changed, plus values the
      * loader would otherwise derive from a changed field (the hot on-resistance defaults to a
-     * multiple of the cold one, so an edit of the cold value writes the hot one out).
+     * multiple of the cold one, so an edit of the cold value writes the hot one out), in table order.
      */
     List<FieldValue> changedFields(T before, T after, List<String> keysInFile) {
-        List<FieldValue> fields = new ArrayList<>();
         List<String> changed = new ArrayList<>();
         for (Binding<T> binding : bindings) {
             if (!Objects.equals(binding.value().apply(before), binding.value().apply(after))) {
                 changed.add(binding.spec().key());
-                fields.add(field(binding, binding.value().apply(after)));
             }
         }
+        // One pass in table order, so that keys added at the same place come out in that order too.
+        List<FieldValue> fields = new ArrayList<>();
         for (Binding<T> binding : bindings) {
             String key = binding.spec().key();
-            String source = DERIVED_FROM.get(key);
+            boolean derivedFromChange = DERIVED_FROM.getOrDefault(key, List.of()).stream().anyMatch(changed::contains);
             boolean absent = binding.acceptedKeys().stream().noneMatch(keysInFile::contains);
-            if (source != null && changed.contains(source) && absent && !changed.contains(key)) {
+            if (changed.contains(key) || (derivedFromChange && absent)) {
                 fields.add(field(binding, binding.value().apply(after)));
             }
         }

@@ -249,7 +249,7 @@ public final class Workbench implements ScreenLoop {
                     applyView(view, -1);
                     grid.setEmptyMessage("no pairing passes the filters (z clears them)");
                     if (pendingView == null) {
-                        showMessage(String.format(Locale.ROOT, "ranked %d pairings in %.1f s", shortlist.evaluatedCount(),
+                        showMessage(String.format(Locale.ROOT, "ranked %,d pairings in %.1f s", shortlist.evaluatedCount(),
                                 ranking.seconds()));
                     }
                     return true;
@@ -479,7 +479,7 @@ public final class Workbench implements ScreenLoop {
             ViewSettings v = view;
             pendingExport = viewWorker.submit(() -> {
                 backend.writeCsv(file, s, order, v);
-                return "wrote " + order.length + " rows to " + file;
+                return String.format(Locale.ROOT, "wrote %,d rows to %s", order.length, file);
             });
             showMessage("writing " + order.length + " rows to " + file + "...");
             return null;
@@ -580,9 +580,9 @@ public final class Workbench implements ScreenLoop {
         String counts = shortlist == null
                 ? "ranking"
                 : shortlist.size() < shortlist.evaluatedCount()
-                        ? String.format(Locale.ROOT, "%d shown / best %d kept of %d / %d feasible", gridModel.rowCount(),
+                        ? String.format(Locale.ROOT, "%,d shown / best %,d kept of %,d / %,d feasible", gridModel.rowCount(),
                                 shortlist.size(), shortlist.evaluatedCount(), shortlist.feasibleCount())
-                        : String.format(Locale.ROOT, "%d shown / %d total / %d feasible", gridModel.rowCount(),
+                        : String.format(Locale.ROOT, "%,d shown / %,d total / %,d feasible", gridModel.rowCount(),
                                 shortlist.size(), shortlist.feasibleCount());
         String filters = view.describeFilters();
         return " " + scenario.name() + " | " + counts + (filters.isEmpty() ? "" : " | only " + filters)
@@ -603,7 +603,7 @@ public final class Workbench implements ScreenLoop {
             double f = ranking.fraction();
             String percent = Double.isNaN(f) ? "" : String.format(Locale.ROOT, " %.0f%%", 100 * f);
             String bar = Double.isNaN(f) ? "" : " " + DetailReport.bar(f, 20, traits.glyphs());
-            return String.format(Locale.ROOT, " ranking%s%s  %d pairings, %.1f s  (Esc stops)",
+            return String.format(Locale.ROOT, " ranking%s%s  %,d pairings, %.1f s  (Esc stops)",
                     percent, bar, pairingCount(), ranking.seconds());
         }
         return " " + message;

@@ -95,10 +95,10 @@ class WorkbenchInTmuxIT {
         }
 
         // The CSV holds the rows shown, in the order shown.
-        Matcher shown = Pattern.compile("(\\d+) shown / (\\d+) total").matcher(sorted);
+        Matcher shown = Pattern.compile("([\\d,]+) shown / ([\\d,]+) total").matcher(sorted);
         assertTrue(shown.find(), sorted);
-        int rows = Integer.parseInt(shown.group(1));
-        assertTrue(exported.contains("wrote " + rows + " rows"), exported);
+        int rows = Integer.parseInt(shown.group(1).replace(",", ""));
+        assertTrue(exported.contains(String.format(java.util.Locale.ROOT, "wrote %,d rows", rows)), exported);
         File csv = out.resolve("work/shortlist.csv").toFile();
         List<String[]> records = new ArrayList<>();
         try (MappingIterator<String[]> it = new CsvMapper().enable(CsvParser.Feature.WRAP_AS_ARRAY)
