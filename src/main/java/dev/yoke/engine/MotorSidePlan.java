@@ -66,7 +66,10 @@ final class MotorSidePlan implements PairingEvaluator.MotorSide {
 
     /** Per piece k and position p at k·4 + p: on-fraction × the channel's mean-square current (A²). */
     final double[] conduction;
-    /** Per piece and position: fraction of the piece the position hard-switches. */
+    /**
+     * Per piece and position: hard turn-ons per period, weighted by the share of the piece
+     * ({@link ConductionPattern#hardTurnOns}: what C_oss and Q_rr are charged to; 0 for a zero-voltage turn-on).
+     */
     final double[] hard;
     /**
      * Per piece and position: the current at the position's hard turn-on and at its hard turn-off, A, each in the
@@ -75,10 +78,13 @@ final class MotorSidePlan implements PairingEvaluator.MotorSide {
      */
     final double[] turnOnCurrent;
     final double[] turnOffCurrent;
-    /** Per piece and position: freewheeling fraction × the mean |I| at the dead times (the ripple's extremes), A. */
+    /**
+     * Per piece and position: the mean current its body diode carries over the leg's two dead times, A
+     * ({@link ConductionPattern#deadTimeDiodeCurrent}: at each edge, the diode of the switch carrying reverse current).
+     */
     final double[] freeCurrent;
     /**
-     * Doubles per fast-path cell: conduction, hard, turn-on current, turn-off current, freewheel × |I|,
+     * Doubles per fast-path cell: conduction, hard turn-ons, turn-on current, turn-off current, diode current,
      * cycle weight × multiplicity.
      */
     static final int CELL = 6;
@@ -416,22 +422,23 @@ final class MotorSidePlan implements PairingEvaluator.MotorSide {
 
     /**
      * Adds one conduction pattern's coefficients, weighted by the share of the piece it holds for: each channel's
-     * mean square from the exact ripple's interval moments, each freewheeling diode's current at the ripple's
-     * extremes ({@link ConductionPattern#channelSquare}, {@link ConductionPattern#freewheelingCurrent}), and the
-     * current at each hard edge ({@link ConductionPattern#turnOnCurrent}, {@link ConductionPattern#turnOffCurrent}).
+     * mean square from the exact ripple's interval moments, each body diode's dead-time current and each hard
+     * turn-on, decided edge by edge from the signed current at the ripple's extremes
+     * ({@link ConductionPattern#channelSquare}, {@link ConductionPattern#deadTimeDiodeCurrent},
+     * {@link ConductionPattern#hardTurnOns}), and the current at each hard edge
+     * ({@link ConductionPattern#turnOnCurrent}, {@link ConductionPattern#turnOffCurrent}).
      */
     private void addPattern(Modulation modulation, double voltageRatio, double deadFraction, RippleCache ripples,
             double r, double share, double ms, int base, int k) {
         ConductionPattern pattern = ConductionPattern.of(modulation, voltageRatio, current[k], deadFraction);
         RippleWaveform w = ripples.get(r, ConductionPattern.rippleOnFraction(modulation, voltageRatio));
         double i = current[k];
-        double diodeCurrent = pattern.freewheelingCurrent(i, w);
         for (int p = 0; p < 4; p++) {
             conduction[base + p] += share * pattern.channelSquare(p, i, ms, w);
-            hard[base + p] += share * pattern.hardSwitching(p);
+            hard[base + p] += share * pattern.hardTurnOns(p, i, w);
             turnOnCurrent[base + p] += share * pattern.turnOnCurrent(p, i, w);
             turnOffCurrent[base + p] += share * pattern.turnOffCurrent(p, i, w);
-            freeCurrent[base + p] += share * pattern.freewheeling(p) * diodeCurrent;
+            freeCurrent[base + p] += share * pattern.deadTimeDiodeCurrent(p, i, w);
         }
         switchingCount[k] += share * pattern.switchingCount();
     }

@@ -29,7 +29,7 @@ final class SwitchConstants {
     final double turnOffEdge;
     /** Time from the turn-off command until the channel stops, s (dead-time check). */
     final double turnOffTime;
-    /** Per frequency: loss per hard-switching position independent of current (C_oss and Q_rr), W. */
+    /** Per frequency: loss per hard turn-on per period, independent of current (C_oss and Q_rr), W. */
     final double[] fixedHardLoss;
     /** Per frequency: the C_oss and the Q_rr parts of {@link #fixedHardLoss}, W (the detailed breakdown). */
     final double[] capacitanceLoss;
@@ -40,7 +40,7 @@ final class SwitchConstants {
      */
     final double[] turnOnLossPerAmp;
     final double[] turnOffLossPerAmp;
-    /** Per frequency: dead-time diode loss per ampere of a freewheeling position, W/A. */
+    /** Per frequency: dead-time diode loss per ampere of mean diode current over both dead times, W/A. */
     final double[] diodeLossPerAmp;
     /** Per frequency: gate-drive loss of one driven switch, W. */
     final double[] gateLossPerSwitch;

@@ -28,8 +28,10 @@ import dev.yoke.model.Modulation;
  *
  * @param onFraction      fraction of the period each position's channel is on (its body diode's dead-time
  *                        share excluded when the pattern is made with a dead time)
- * @param hardSwitching   1 where the position makes the hard turn-on and turn-off of its leg, else 0
- * @param freewheeling    1 where the position's body diode carries the dead times of its leg, else 0
+ * @param hardSwitching   1 where the position makes the hard turn-on and turn-off of its leg, else 0, by the sign
+ *                        of the average current (each edge's own current decides: {@link #hardTurnOns})
+ * @param freewheeling    1 where the position's body diode carries the dead times of its leg, else 0, by the sign
+ *                        of the average current (each edge's own current decides: {@link #deadTimeDiodeCurrent})
  * @param switchingCount  number of switches driven at the PWM frequency (gate-drive loss)
  * @param rippleSwing     ΔV of the output as a multiple of V_bus
  * @param rippleOnFraction δ of the output waveform
@@ -244,8 +246,10 @@ public record ConductionPattern(
     }
 
     /**
-     * Mean magnitude of the current a freewheeling body diode carries through its leg's two dead times, A:
-     * one falls at the ripple's maximum, the other at its minimum, so it is their mean, |I| for a triangle.
+     * Mean magnitude of the current through a leg's two dead times, A: one falls at the ripple's maximum, the
+     * other at its minimum, so it is their mean, |I| for a triangle. With continuous current the nominal
+     * freewheeling diode carries all of it; {@link #deadTimeDiodeCurrent} splits it between the leg's two
+     * diodes edge by edge (the two always add up to this).
      */
     public double freewheelingCurrent(double current, RippleWaveform waveform) {
         return (Math.abs(current + rippleSign * waveform.highDeviation())
@@ -270,8 +274,8 @@ public record ConductionPattern(
      * current rises while the output is at its higher level). With continuous current the hard switch therefore
      * turns on at the valley of its current and off at the peak. When the current crosses zero within the
      * period the valley edge reverses: the hard switch's turn-on is soft (0 here) and its partner turns off hard
-     * instead, with that reversed current; the ½·C_oss·V² and Q_rr·V terms stay charged to the nominal hard
-     * switch ({@link #hardSwitching(int)}), which overstates a soft turn-on's loss (conservative).
+     * instead, with that reversed current ({@link #hardTurnOns} and {@link #deadTimeDiodeCurrent} follow the same
+     * edge-by-edge rule).
      *
      * @param position {@link #HIGH_A} … {@link #LOW_B}
      * @param current  average motor current I, A (positive from leg A to leg B)
@@ -286,18 +290,73 @@ public record ConductionPattern(
         return edgeCurrent(position, false, current, waveform);
     }
 
+    /**
+     * Hard turn-ons the position makes per period: 1 or 0, what the ½·C_oss·V² dump and the Q_rr·V of its
+     * partner's body diode are charged to. Decided at the instant of the turn-on from the signed current, by the
+     * rule of {@link #turnOnCurrent}: forward current in the switch turning on means its partner's diode was
+     * carrying it, so the channel must discharge its own C_oss and reverse-recover that diode (hard); reverse
+     * current means the partner's hard turn-off has already swung the node onto this switch's own body diode, so
+     * the load current has discharged C_oss and no diode is recovered by this switch: a zero-voltage turn-on,
+     * lossless in the ideal model (Mohan, Undeland &amp; Robbins, <i>Power Electronics</i>, ch. 9, and Erickson
+     * &amp; Maksimović, ch. 20, on zero-voltage switching, from memory). With continuous current this is the
+     * nominal hard switch ({@link #hardSwitching(int)}); with a ripple that reverses at the valley, neither switch
+     * of the leg turns on hard. Exactly zero current at the edge keeps the nominal assignment (the node does not
+     * move, so the switch turning on finds its C_oss charged). 0 for a leg that does not switch.
+     *
+     * @param position {@link #HIGH_A} … {@link #LOW_B}
+     * @param current  average motor current I, A (positive from leg A to leg B)
+     * @param waveform the ripple at this pattern's voltage ({@link PwmRipple#waveform})
+     */
+    public double hardTurnOns(int position, double current, RippleWaveform waveform) {
+        int high = position & ~1;
+        if (hardSwitching[high] + hardSwitching[high + 1] == 0) {
+            return 0.0;
+        }
+        double forward = forwardAtEdge(position, true, current, waveform);
+        return forward > 0 ? 1.0 : forward < 0 ? 0.0 : hardSwitching[position];
+    }
+
+    /**
+     * Mean current the position's body diode carries over its leg's two dead times, A: at each edge of the leg the
+     * current flows in reverse through exactly one of the two switches, and that switch's diode carries it for the
+     * dead time (the switch turning off, if it was conducting in reverse: the other turns on hard; else the switch
+     * turning on, whose turn-on is then soft). Each position takes part in both edges of its leg (once turning on,
+     * once turning off), so this is the mean of its reverse current at the two, clamped at 0. With continuous
+     * current it is the nominal freewheeling position's {@link #freewheelingCurrent} and 0 for its partner; with a
+     * ripple that reverses, the nominal hard switch's diode carries the valley's reversed current and its partner's
+     * the peak's, so the leg's total is unchanged and only its split moves. 0 for a leg that does not switch.
+     *
+     * @param position {@link #HIGH_A} … {@link #LOW_B}
+     * @param current  average motor current I, A (positive from leg A to leg B)
+     * @param waveform the ripple at this pattern's voltage ({@link PwmRipple#waveform})
+     */
+    public double deadTimeDiodeCurrent(int position, double current, RippleWaveform waveform) {
+        int high = position & ~1;
+        if (hardSwitching[high] + hardSwitching[high + 1] == 0) {
+            return 0.0;
+        }
+        double atTurnOn = forwardAtEdge(position, true, current, waveform);
+        double atTurnOff = forwardAtEdge(position, false, current, waveform);
+        return (Math.max(0.0, -atTurnOn) + Math.max(0.0, -atTurnOff)) / 2;
+    }
+
     private double edgeCurrent(int position, boolean turnOn, double current, RippleWaveform waveform) {
         int high = position & ~1;
         if (hardSwitching[high] + hardSwitching[high + 1] == 0) {
             return 0.0; // a leg that does not switch makes no edges
         }
+        return Math.max(0.0, forwardAtEdge(position, turnOn, current, waveform));
+    }
+
+    /** Signed current in a position's forward direction at its turn-on or turn-off edge, A. */
+    private double forwardAtEdge(int position, boolean turnOn, double current, RippleWaveform waveform) {
+        int high = position & ~1;
         boolean forwardWithMotorCurrent = (high == HIGH_A) == (position == high); // HA and LB carry +I forward
         boolean outputStepsUp = forwardWithMotorCurrent == turnOn;
         double first = current + rippleSign * waveform.highDeviation();
         double second = current + rippleSign * waveform.lowDeviation();
         double atEdge = outputStepsUp ? Math.min(first, second) : Math.max(first, second);
-        double forward = forwardWithMotorCurrent ? atEdge : -atEdge;
-        return Math.max(0.0, forward);
+        return forwardWithMotorCurrent ? atEdge : -atEdge;
     }
 
     /** One leg: high-side duty, whether it switches, and the current leaving its midpoint. */

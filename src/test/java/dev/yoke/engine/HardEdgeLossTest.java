@@ -88,4 +88,46 @@ class HardEdgeLossTest {
         assertEquals(0.0, y.switchLosses().get(1).switching(), 0.0);
         assertEquals(0.0, y.switchLosses().get(2).switching(), 0.0);
     }
+
+    /**
+     * C_oss and Q_rr once per hard turn-on only. With continuous current (4 A) the switch whose turn-on takes the
+     * current from its partner's diode is charged ½·C_oss·V²·f and Q_rr·V·f (Erickson &amp; Maksimović, ch. 4,
+     * from memory) and its partner nothing; at zero mean current the symmetric ripple (±ΔI/2) reverses at every
+     * edge, so every turn-on is a zero-voltage one and nothing is charged (Mohan, Undeland &amp; Robbins, ch. 9,
+     * zero-voltage switching, from memory), while each of the four diodes carries ΔI/2 for one of its leg's two
+     * dead times: V_f·(ΔI/4)·2·t_dead·f each (law: symmetry), and each switch turns off hard once, at ΔI/2.
+     * 1e-9 relative: rounding; the winding does not warm at zero current, so the square wave stays exactly 50 %.
+     */
+    @Test
+    void outputCapacitanceAndRecoveryAreChargedOnlyToHardTurnOns() {
+        PowerSwitch q = BridgeConductionNgspiceTest.powerSwitch();
+        SwitchConstants s = constants(q);
+        double capacitance = SwitchLossLaws.outputCapacitance(q.outputCapacitance(), BUS, F);
+        double recovery = SwitchLossLaws.reverseRecovery(q.reverseRecoveryCharge(), BUS, F);
+        SegmentResult continuous = explain(q);
+        for (int p = 0; p < 4; p++) {
+            boolean hard = p == 0 || p == 3; // HA and LB hard-switch (I > 0, bipolar)
+            SwitchLoss l = continuous.switchLosses().get(p);
+            assertEquals(hard ? capacitance : 0.0, l.outputCapacitance(), 1e-9 * capacitance, "C_oss " + p);
+            assertEquals(hard ? recovery : 0.0, l.reverseRecovery(), 1e-9 * recovery, "Q_rr " + p);
+        }
+
+        Case zero = new Case(Modulation.BIPOLAR, 0.0, 0.0, 1);
+        Catalog catalog = new Catalog(List.of(BridgeConductionNgspiceTest.motor(zero)), List.of(q));
+        SegmentResult y = DriveEvaluator.of(BridgeConductionNgspiceTest.scenario(zero), catalog)
+                .explain(0, 0, 0, 0).segments().get(0);
+        assertEquals(0.0, y.currentAvg(), 1e-12, "zero mean current");
+        assertTrue(y.currentRipplePp() > 4.0, "a ripple that reverses at both edges");
+        double diode = SwitchLossLaws.deadTimeDiode(q.diodeForwardVoltage(), y.currentRipplePp() / 4,
+                BridgeConductionNgspiceTest.scenario(zero).bench().deadTime(), F);
+        for (int p = 0; p < 4; p++) {
+            SwitchLoss l = y.switchLosses().get(p);
+            assertEquals(0.0, l.outputCapacitance(), 0.0, "no C_oss dump at a zero-voltage turn-on " + p);
+            assertEquals(0.0, l.reverseRecovery(), 0.0, "no diode recovered at a zero-voltage turn-on " + p);
+            // Each switch turns off hard once, at the edge where it carries +ΔI/2 forward; no turn-on overlap.
+            double overlap = SwitchLossLaws.hardTurnOff(BUS, y.currentRipplePp() / 2, s.turnOffEdge, F);
+            assertEquals(overlap, l.switching(), 1e-9 * overlap, "one hard turn-off, no hard turn-on " + p);
+            assertEquals(diode, l.deadTimeDiode(), 1e-9 * diode, "equal dead-time diode share " + p);
+        }
+    }
 }

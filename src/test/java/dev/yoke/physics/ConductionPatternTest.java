@@ -238,4 +238,86 @@ class ConductionPatternTest {
         assertEquals(switchingLegs * ((half - 0.5) + (0.5 + half)), legs, 1e-12, "every edge once");
         assertEquals(0.0, hardOn, "soft turn-on of the hard switch");
     }
+
+    /**
+     * Dead-time diodes with continuous current: the nominal freewheeling diode carries the mean of the current at
+     * the leg's two edges, the hard switch's diode nothing, and each hard switch makes exactly one hard turn-on per
+     * period (common practice: clamped inductive switching of a synchronous leg). Same as the nominal assignment,
+     * so continuous-current results do not move. 1e-12 A: rounding.
+     */
+    @ParameterizedTest
+    @MethodSource("table")
+    void continuousCurrentKeepsTheNominalDiodeAndOneHardTurnOn(Modulation m, double v, int sign) {
+        double current = sign * 3.0;
+        ConductionPattern p = ConductionPattern.of(m, v, current);
+        RippleWaveform w = PwmRipple.waveform(p.rippleSwing() * 24, 1.0, 1e-3, p.rippleOnFraction(),
+                p.ripplePeriodFactor() / 20e3);
+        assertEquals(false, w.crossesZero(current), "continuous current for this check");
+        for (int i = 0; i < ConductionPattern.POSITIONS; i++) {
+            String name = ConductionPattern.POSITION_NAMES[i];
+            assertEquals(p.freewheeling(i) * p.freewheelingCurrent(current, w), p.deadTimeDiodeCurrent(i, current, w),
+                    1e-12, name + " diode");
+            assertEquals(p.hardSwitching(i), p.hardTurnOns(i, current, w), name + " hard turn-ons");
+        }
+    }
+
+    /**
+     * A ripple that reverses at the valley edge: the current there flows in reverse through the nominal hard
+     * switch, so the switch turning off (its partner) turns off hard and the current swings the node onto the hard
+     * switch's own body diode, which carries that dead time with |valley|; at the peak edge the partner's diode
+     * carries the peak as usual. Neither turn-on is hard: both are zero-voltage turn-ons, with no C_oss dump and no
+     * diode recovered (Mohan, Undeland &amp; Robbins, ch. 9, and Erickson &amp; Maksimović, ch. 20, on
+     * zero-voltage switching, from memory). Law: each edge's current is carried by exactly one diode, so a leg's
+     * two diodes add up to the mean of |valley| and |peak|. 1e-12 A: rounding.
+     */
+    @ParameterizedTest
+    @MethodSource("table")
+    void aReversingValleyMovesThatDeadTimeToTheHardSwitchsOwnDiode(Modulation m, double v, int sign) {
+        double current = sign * 0.5;
+        ConductionPattern p = ConductionPattern.of(m, v, current);
+        RippleWaveform w = PwmRipple.waveform(p.rippleSwing() * 24, 1.0, 1e-4, p.rippleOnFraction(),
+                p.ripplePeriodFactor() / 20e3);
+        assertEquals(true, w.crossesZero(current), "the ripple must cross zero for this check");
+        // The two extremes of the real current; the valley is the one that flows against the mean current.
+        double first = current + p.rippleSign() * w.highDeviation();
+        double second = current + p.rippleSign() * w.lowDeviation();
+        double valley = Math.abs(current > 0 ? Math.min(first, second) : Math.max(first, second));
+        double peak = Math.abs(current > 0 ? Math.max(first, second) : Math.min(first, second));
+        for (int high = 0; high < ConductionPattern.POSITIONS; high += 2) {
+            if (p.hardSwitching(high) + p.hardSwitching(high + 1) == 0) {
+                continue; // sign-magnitude's held leg makes no edges
+            }
+            int hard = p.hardSwitching(high) > 0 ? high : high + 1;
+            int free = hard == high ? high + 1 : high;
+            String leg = ConductionPattern.POSITION_NAMES[high];
+            assertEquals(valley / 2, p.deadTimeDiodeCurrent(hard, current, w), 1e-12, leg + " hard switch's diode");
+            assertEquals(peak / 2, p.deadTimeDiodeCurrent(free, current, w), 1e-12, leg + " partner's diode");
+            assertEquals(p.freewheelingCurrent(current, w),
+                    p.deadTimeDiodeCurrent(hard, current, w) + p.deadTimeDiodeCurrent(free, current, w), 1e-12,
+                    leg + " both diodes");
+            assertEquals(0.0, p.hardTurnOns(hard, current, w), leg + " zero-voltage turn-on of the hard switch");
+            assertEquals(0.0, p.hardTurnOns(free, current, w), leg + " zero-voltage turn-on of its partner");
+        }
+    }
+
+    /**
+     * Zero mean current with a symmetric ripple (bipolar at V = 0: a 50 % square wave, so the R-L ripple is
+     * symmetric about the mean for any L/R by half-wave symmetry): valley and peak are ∓ΔI/2, so each edge of a
+     * leg is the mirror of the other, both diodes of a leg carry the same dead-time current, ΔI/4 over the two
+     * dead times, and no switch turns on hard (law: symmetry; zero-voltage switching as above, from memory).
+     * 1e-12 A: rounding.
+     */
+    @org.junit.jupiter.api.Test
+    void symmetricReversingRippleAtZeroCurrentSplitsTheDeadTimeEquallyAndSwitchesNothingHard() {
+        for (double current : new double[] {0.0, -0.0}) {
+            ConductionPattern p = ConductionPattern.of(Modulation.BIPOLAR, 0.0, current);
+            RippleWaveform w = PwmRipple.waveform(p.rippleSwing() * 24, 2.0, 1e-4, p.rippleOnFraction(), 1 / 20e3);
+            assertEquals(-w.lowDeviation(), w.highDeviation(), 1e-12, "symmetric ripple");
+            for (int i = 0; i < ConductionPattern.POSITIONS; i++) {
+                String name = ConductionPattern.POSITION_NAMES[i];
+                assertEquals(w.peakToPeak() / 4, p.deadTimeDiodeCurrent(i, current, w), 1e-12, name + " diode");
+                assertEquals(0.0, p.hardTurnOns(i, current, w), name + " hard turn-ons");
+            }
+        }
+    }
 }
