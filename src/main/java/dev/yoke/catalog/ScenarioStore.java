@@ -12,6 +12,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
+import java.util.Objects;
 
 /**
  * Saves a scenario file. An existing file is edited in place ({@link ScenarioText}, through the same
@@ -20,7 +21,9 @@ import java.util.Map;
  * that were kept, edited or moved keep their own lines and comments. A new file, one that does not
  * load, or one laid out in a way Yoke does not edit in place (flow style {@code {...}}) is written
  * anew from the scenario, keeping the comment block at its top: keys in {@link PartFields} order,
- * numbers through {@link Units#formatExact} so that they load back as the same doubles.
+ * numbers through {@link Units#formatExact} so that they load back as the same doubles. Comments
+ * below that block are then dropped (the backup keeps them): the result says so and why
+ * ({@link SavedScenario#bodyRewritten}), so that the editor can tell the user.
  *
  * <p>The save is atomic with a backup ({@link AtomicFile}); afterwards the file is loaded again and
  * must give back an equal scenario, otherwise the previous version is put back and
@@ -39,6 +42,10 @@ public final class ScenarioStore {
     private ScenarioStore() {
     }
 
+    /** The text to write, and why the body was written anew ("" when edited in place or created). */
+    private record Plan(String text, String rewrittenBecause) {
+    }
+
     /**
      * Writes {@code scenario} to {@code file} (created when absent) and returns it as loaded back.
      * Whatever the file holds now is what is edited, even if it changed since the editor read it.
@@ -46,7 +53,7 @@ public final class ScenarioStore {
      * @throws InputException the written file would not load; the previous version is back
      * @throws IOException    the disk failed, or the save did not verify ({@link SaveNotVerifiedException})
      */
-    public static LoadedScenario save(Scenario scenario, Path file) throws IOException, InputException {
+    public static SavedScenario save(Scenario scenario, Path file) throws IOException, InputException {
         for (int attempt = 1; ; attempt++) {
             try {
                 return write(scenario, file, textFor(scenario, file, null));
@@ -64,7 +71,7 @@ public final class ScenarioStore {
      *
      * @throws ChangedOnDiskException the file changed since it was loaded; nothing was written
      */
-    public static LoadedScenario save(Scenario scenario, Path file, CatalogFile loadedAs)
+    public static SavedScenario save(Scenario scenario, Path file, CatalogFile loadedAs)
             throws IOException, InputException, ChangedOnDiskException {
         return write(scenario, file, textFor(scenario, file, loadedAs));
     }
@@ -75,10 +82,10 @@ public final class ScenarioStore {
      *
      * @param loadedAs the version the file must still be, or null to take it as it is now
      */
-    private static String textFor(Scenario scenario, Path file, CatalogFile loadedAs)
+    private static Plan textFor(Scenario scenario, Path file, CatalogFile loadedAs)
             throws IOException, ChangedOnDiskException {
         if (loadedAs == null && !Files.exists(file)) {
-            return render(scenario, NEW_FILE_HEADER);
+            return new Plan(render(scenario, NEW_FILE_HEADER), "");
         }
         byte[] bytes = loadedAs != null ? loadedAs.readUnchanged(file) : Files.readAllBytes(file);
         String text = SourceFile.textOf(bytes);
@@ -86,15 +93,18 @@ public final class ScenarioStore {
         try {
             before = ScenarioLoader.load(file);
         } catch (InputException e) {
-            return render(scenario, headerOf(text)); // a file that does not load is replaced (kept as .bak)
+            // a file that does not load is replaced (kept as .bak)
+            return new Plan(render(scenario, headerOf(text)), "the file did not load as a scenario");
         }
         if (!before.file().sha256().equalsIgnoreCase(CatalogFile.sha256(bytes))) {
             throw new ChangedOnDiskException(file); // changed between the two reads
         }
         try {
-            return ScenarioText.edited(text, before.scenario(), scenario);
+            return new Plan(ScenarioText.edited(text, before.scenario(), scenario), "");
         } catch (IOException notEditable) {
-            return render(scenario, headerOf(text));
+            // "profile.segments is written in flow style [...]; write it as a block …": the first clause says where
+            String where = Objects.requireNonNullElse(notEditable.getMessage(), "its layout").split(";", 2)[0].strip();
+            return new Plan(render(scenario, headerOf(text)), where);
         }
     }
 
@@ -137,16 +147,16 @@ public final class ScenarioStore {
         return kept.isBlank() ? "" : kept;
     }
 
-    private static LoadedScenario write(Scenario scenario, Path file, String text) throws IOException, InputException {
+    private static SavedScenario write(Scenario scenario, Path file, Plan plan) throws IOException, InputException {
         boolean existed = Files.exists(file);
-        AtomicFile.write(file, text.getBytes(StandardCharsets.UTF_8));
+        AtomicFile.write(file, plan.text().getBytes(StandardCharsets.UTF_8));
         try {
             LoadedScenario back = ScenarioLoader.load(file);
             List<String> differences = differences(scenario, back.scenario());
             if (!differences.isEmpty()) {
                 throw new SaveNotVerifiedException(List.of(file), differences);
             }
-            return back;
+            return new SavedScenario(back, plan.rewrittenBecause());
         } catch (IOException | InputException | RuntimeException e) {
             try {
                 if (existed) {

@@ -49,7 +49,7 @@ class ScenarioSavePropertiesTest {
             }
             Scenario edited = session.scenario;
 
-            LoadedScenario saved = ScenarioStore.save(edited, file, loaded.file());
+            SavedScenario saved = ScenarioStore.save(edited, file, loaded.file());
 
             assertEquals(edited, saved.scenario());
             assertEquals(edited, ScenarioLoader.load(file).scenario());

@@ -14,6 +14,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import java.util.function.UnaryOperator;
 import java.util.stream.Stream;
 import org.junit.jupiter.api.Test;
@@ -208,7 +209,7 @@ class ScenarioStoreCommentsTest {
         Scenario edited = withSegments(before.scenario(), list -> list.set(1, new Segment("", hold.duration(),
                 hold.speedStart(), hold.speedEnd(), hold.torque())));
 
-        LoadedScenario saved = ScenarioStore.save(edited, file, before.file());
+        SavedScenario saved = ScenarioStore.save(edited, file, before.file());
 
         assertEquals("segment 2", saved.scenario().profile().segments().get(1).label());
         assertTrue(Files.readString(file).contains("    - label: segment 2\n      duration: 2 s\n"));
@@ -256,8 +257,19 @@ class ScenarioStoreCommentsTest {
                 + " torque: 1 N*m}]\n");
         Scenario edited = withSegments(ScenarioLoader.load(file).scenario(),
                 list -> list.add(new Segment("rest", 3, 0, 0, 0.2)));
-        assertEquals(edited, ScenarioStore.save(edited, file).scenario());
+        SavedScenario saved = ScenarioStore.save(edited, file);
+        assertEquals(edited, saved.scenario());
         assertTrue(Files.readString(file).startsWith("# Invented machine for the scenario-save tests"));
+        // the save says that it wrote the body anew, and names the part it could not edit in place
+        assertEquals(Optional.of("profile.segments is written in flow style [...]"), saved.bodyRewritten());
+    }
+
+    @Test
+    void saveEditedInPlaceSaysNothingWasWrittenAnew() throws Exception {
+        Path file = commented();
+        Scenario edited = withSegments(ScenarioLoader.load(file).scenario(),
+                list -> list.add(new Segment("rest", 3, 0, 0, 0.2)));
+        assertEquals(Optional.empty(), ScenarioStore.save(edited, file).bodyRewritten());
     }
 
     // ---- the demo scenarios as fixtures (copied; demo-data is never written) ----
@@ -341,7 +353,7 @@ class ScenarioStoreCommentsTest {
     private static Diff save(Path file, Scenario edited) throws Exception {
         List<String> before = Files.readAllLines(file);
         LoadedScenario stamp = ScenarioLoader.load(file);
-        LoadedScenario saved = ScenarioStore.save(edited, file, stamp.file());
+        SavedScenario saved = ScenarioStore.save(edited, file, stamp.file());
         assertEquals(edited, saved.scenario(), "what the save reports");
         assertEquals(edited, ScenarioLoader.load(file).scenario(), "what the file loads as");
         return Diff.of(before, Files.readAllLines(file));

@@ -40,7 +40,7 @@ class ScenarioStoreTest {
         Scenario edited = new Scenario("test conveyor, longer", bench,
                 new Profile(profile.loadInertia(), profile.repeat(), segments));
 
-        LoadedScenario saved = ScenarioStore.save(edited, file);
+        SavedScenario saved = ScenarioStore.save(edited, file);
 
         assertEquals(edited, saved.scenario());
         assertEquals(edited, ScenarioLoader.load(file).scenario());

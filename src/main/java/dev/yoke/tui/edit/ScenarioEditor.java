@@ -167,8 +167,7 @@ public final class ScenarioEditor extends EditorWindow {
         }
         passOn();
         try {
-            saver.save(s.get(), file);
-            savedAs(s.get(), "");
+            savedAs(s.get(), "", saver.save(s.get(), file));
         } catch (ChangedOnDiskException e) {
             askAboutChangedFile(s.get());
         } catch (IOException | RuntimeException e) {
@@ -177,17 +176,32 @@ public final class ScenarioEditor extends EditorWindow {
         refresh();
     }
 
-    private void savedAs(Scenario scenario, String note) {
+    /**
+     * Records a save and says so; when the file's body was written anew ({@code rewritten} says
+     * why), the user's comments inside it are gone from the file, so a notice says where they are.
+     */
+    private void savedAs(Scenario scenario, String note, Optional<String> rewritten) {
         saved = scenario;
-        message = "Saved " + file.getFileName() + note + " (previous version kept as " + file.getFileName() + ".bak)";
+        String name = file.getFileName().toString();
+        if (rewritten.isEmpty()) {
+            message = "Saved " + name + note + " (previous version kept as " + name + ".bak)";
+            return;
+        }
+        message = "Saved " + name + note + "; body written anew, its comments are only in " + name + ".bak";
+        LinkedHashMap<String, Runnable> ok = new LinkedHashMap<>();
+        ok.put("OK", this::refresh);
+        ChoiceWindow.ask(gui, "Saved; comments dropped", "Saved " + name + note + ", but Yoke could not edit it"
+                + " in place (" + rewritten.get() + "), so it wrote the file's body anew in its own layout."
+                + " The comment lines at the top are kept; comments further down are gone from " + name
+                + ". The previous file, comments and all, is " + name + ".bak. To keep comments in"
+                + " future saves, write that part one value per line (block style).", ok, unicode);
     }
 
     private void askAboutChangedFile(Scenario scenario) {
         LinkedHashMap<String, Runnable> answers = new LinkedHashMap<>();
         answers.put("Overwrite", () -> {
             try {
-                saver.overwrite(scenario, file);
-                savedAs(scenario, " over the other version");
+                savedAs(scenario, " over the other version", saver.overwrite(scenario, file));
             } catch (IOException | RuntimeException e) {
                 message = "Not saved: " + file + ": " + e.getMessage();
             }

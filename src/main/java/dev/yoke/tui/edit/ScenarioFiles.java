@@ -3,14 +3,15 @@ package dev.yoke.tui.edit;
 import dev.yoke.catalog.CatalogFile;
 import dev.yoke.catalog.ChangedOnDiskException;
 import dev.yoke.catalog.InputException;
-import dev.yoke.catalog.LoadedScenario;
 import dev.yoke.catalog.ScenarioLoader;
+import dev.yoke.catalog.SavedScenario;
 import dev.yoke.catalog.ScenarioStore;
 import dev.yoke.model.Scenario;
 
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.Optional;
 
 /**
  * Saves scenario files through the catalog package's {@link ScenarioStore}: atomic, the previous
@@ -36,20 +37,23 @@ final class ScenarioFiles implements ScenarioSaver {
     }
 
     @Override
-    public void save(Scenario scenario, Path file) throws IOException, ChangedOnDiskException {
+    public Optional<String> save(Scenario scenario, Path file) throws IOException, ChangedOnDiskException {
         try {
-            LoadedScenario written = known == null ? ScenarioStore.save(scenario, file)
+            SavedScenario written = known == null ? ScenarioStore.save(scenario, file)
                     : ScenarioStore.save(scenario, file, known);
             known = written.file();
+            return written.bodyRewritten();
         } catch (InputException e) {
             throw new IOException(CatalogPartStore.describe(e), e);
         }
     }
 
     @Override
-    public void overwrite(Scenario scenario, Path file) throws IOException {
+    public Optional<String> overwrite(Scenario scenario, Path file) throws IOException {
         try {
-            known = ScenarioStore.save(scenario, file).file();
+            SavedScenario written = ScenarioStore.save(scenario, file);
+            known = written.file();
+            return written.bodyRewritten();
         } catch (InputException e) {
             throw new IOException(CatalogPartStore.describe(e), e);
         }

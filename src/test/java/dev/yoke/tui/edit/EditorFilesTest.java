@@ -183,6 +183,47 @@ class EditorFilesTest {
         assertEquals(original, Files.readString(AtomicFile.backupOf(file)), "the backup is the previous file");
     }
 
+    /**
+     * A scenario whose segments are written on one line (YAML flow style) cannot be edited in place:
+     * the save writes the body anew and its comments survive only in the backup. The editor says so
+     * when it happens; a file laid out one value per line gets no such notice.
+     */
+    @Test
+    void savingAFlowStyleScenarioSaysItsCommentsAreOnlyInTheBackup() throws Exception {
+        String block = Files.readString(Path.of("demo-data", "conveyor.yaml"))
+                .replace("  bus_voltage: 12 V\n", "  bus_voltage: 12 V   # the supply\n");
+        int at = block.indexOf("  segments:");
+        String flow = block.substring(0, at) + "  segments: [{label: start, duration: 1 s, speed_start: 0 rad/s,"
+                + " speed_end: 6 rad/s, torque: 1.2 N*m}, {label: run loaded, duration: 10 min,"
+                + " speed_start: 6 rad/s, torque: 1.2 N*m}]\n";
+
+        Path flowFile = Files.writeString(dir.resolve("flow.yaml"), flow);
+        try (TerminalDriver t = new TerminalDriver(100, 30)) {
+            ScenarioEditor editor = ScenarioEditor.open(t.gui, ScenarioLoader.load(flowFile).scenario(), flowFile, s -> { });
+            t.press(KeyType.ArrowDown).clearField(20).type("12.5 V").press(KeyType.F2);
+            String screen = t.text();
+            assertTrue(screen.contains("Saved; comments dropped"), screen);
+            assertTrue(screen.contains("profile.segments is written in flow style"), screen);
+            assertTrue(screen.contains("The previous file, comments and all, is") && screen.contains("flow.yaml.bak."),
+                    screen);
+            t.press(KeyType.Enter); // OK
+            assertTrue(t.text().contains("Saved flow.yaml; body written anew, its comments are only in flow.yaml.bak"),
+                    t.text());
+            assertEquals(editor.current().orElseThrow(), ScenarioLoader.load(flowFile).scenario());
+        }
+        assertFalse(Files.readString(flowFile).contains("# the supply"), "the body was written anew");
+        assertEquals(flow, Files.readString(AtomicFile.backupOf(flowFile)), "the backup keeps the comments");
+
+        Path blockFile = Files.writeString(dir.resolve("block.yaml"), block);
+        try (TerminalDriver t = new TerminalDriver(100, 30)) {
+            ScenarioEditor.open(t.gui, ScenarioLoader.load(blockFile).scenario(), blockFile, s -> { });
+            t.press(KeyType.ArrowDown).clearField(20).type("12.5 V").press(KeyType.F2);
+            assertTrue(t.text().contains("Saved block.yaml (previous version kept as block.yaml.bak)"), t.text());
+            assertFalse(t.text().contains("comments dropped") || t.text().contains("written anew"), t.text());
+        }
+        assertTrue(Files.readString(blockFile).contains("  bus_voltage: 12.5 V   # the supply\n"), "edited in place");
+    }
+
     @Test
     void scenarioChangedOnDiskIsNotOverwrittenWithoutAsking() throws Exception {
         Path file = dir.resolve("conveyor.yaml");

@@ -5,6 +5,7 @@ import dev.yoke.model.Scenario;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Optional;
 
 /** A scenario saver that records what it was asked to write, or fails with a given error. */
 final class RecordingSaver implements ScenarioSaver {
@@ -18,15 +19,16 @@ final class RecordingSaver implements ScenarioSaver {
     }
 
     @Override
-    public void save(Scenario scenario, Path file) throws IOException {
-        overwrite(scenario, file);
+    public Optional<String> save(Scenario scenario, Path file) throws IOException {
+        return overwrite(scenario, file);
     }
 
     @Override
-    public void overwrite(Scenario scenario, Path file) throws IOException {
+    public Optional<String> overwrite(Scenario scenario, Path file) throws IOException {
         if (failure != null) {
             throw failure;
         }
         saved.add(scenario);
+        return Optional.empty();
     }
 }
