@@ -301,7 +301,10 @@ public record ConductionPattern(
      * &amp; Maksimović, ch. 20, on zero-voltage switching, from memory). With continuous current this is the
      * nominal hard switch ({@link #hardSwitching(int)}); with a ripple that reverses at the valley, neither switch
      * of the leg turns on hard. Exactly zero current at the edge keeps the nominal assignment (the node does not
-     * move, so the switch turning on finds its C_oss charged). 0 for a leg that does not switch.
+     * move, so the switch turning on finds its C_oss charged). 0 for a leg that does not switch. Like the rest of
+     * the ideal-waveform model, this takes any reversed current as swinging the node within the dead time; a real
+     * leg needs about 2·C_oss·V/t_dead for that (both output capacitances recharged), and below it keeps part of
+     * the ½·C_oss·V² (incomplete zero-voltage switching), which is not modelled.
      *
      * @param position {@link #HIGH_A} … {@link #LOW_B}
      * @param current  average motor current I, A (positive from leg A to leg B)
