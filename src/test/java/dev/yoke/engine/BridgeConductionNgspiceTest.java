@@ -428,10 +428,7 @@ class BridgeConductionNgspiceTest {
             Map<String, Double> sim = sims.get(k);
             boolean crossing = k >= crossingFrom;
             Case planned = cases.get(k);
-            // Placement, not a check: a reversing current leaves the simulated mean off the planned one (the
-            // back-EMF's dead-time estimate assumes one sign), so Yoke is asked at the simulated mean.
-            Case c = crossing ? new Case(planned.modulation(), planned.voltageRatio(), sim.get("iavg"),
-                    planned.tauPeriods()) : planned;
+            Case c = askedCase(planned, sim, crossing);
             Scenario scenario = scenario(c);
             DriveEvaluator evaluator = (DriveEvaluator) DriveEvaluator.of(scenario, new Catalog(List.of(motor(c)),
                     List.of(powerSwitch())));
@@ -563,9 +560,7 @@ class BridgeConductionNgspiceTest {
             Map<String, Double> sim = sims.get(k);
             boolean crossing = k >= crossingFrom;
             Case planned = cases.get(k);
-            // Placement, not a check: Yoke is asked at the simulated mean (see the edge check).
-            Case c = crossing ? new Case(planned.modulation(), planned.voltageRatio(), sim.get("iavg"),
-                    planned.tauPeriods()) : planned;
+            Case c = askedCase(planned, sim, crossing);
             SegmentResult y = yoke(c);
             String at = c.toString();
             for (int p = 0; p < 4; p++) {
@@ -609,5 +604,14 @@ class BridgeConductionNgspiceTest {
         // Both kinds of turn-on must be present, or the decision check would prove nothing.
         assertTrue(hardTurnOns >= 30 && softTurnOns >= 30, hardTurnOns + " hard, " + softTurnOns + " soft turn-ons");
         assertAll(checks);
+    }
+
+    /**
+     * The case Yoke is asked about. Placement, not a check: a reversing current leaves the simulated mean off the
+     * planned one (the back-EMF's dead-time estimate assumes one sign), so Yoke is asked at the simulated mean.
+     */
+    private static Case askedCase(Case planned, Map<String, Double> sim, boolean crossing) {
+        return crossing ? new Case(planned.modulation(), planned.voltageRatio(), sim.get("iavg"), planned.tauPeriods())
+                : planned;
     }
 }
