@@ -93,9 +93,9 @@ public final class DriveEvaluator implements PairingEvaluator {
     }
 
     /** Temperature-independent loss of one cell, W. */
-    static double otherLoss(SwitchConstants s, int fi, double hard, double turnOnCurrent, double turnOffCurrent,
-            double freeCurrent) {
-        return hard * s.fixedHardLoss[fi] + turnOnCurrent * s.turnOnLossPerAmp[fi]
+    static double otherLoss(SwitchConstants s, int fi, double capacitance, double hard, double turnOnCurrent,
+            double turnOffCurrent, double freeCurrent) {
+        return capacitance * s.capacitanceLoss[fi] + hard * s.recoveryLoss[fi] + turnOnCurrent * s.turnOnLossPerAmp[fi]
                 + turnOffCurrent * s.turnOffLossPerAmp[fi] + freeCurrent * s.diodeLossPerAmp[fi];
     }
 
@@ -109,7 +109,8 @@ public final class DriveEvaluator implements PairingEvaluator {
         MotorSidePlan plan = (MotorSidePlan) motorSide;
         SwitchConstants s = switches[switchIndex];
         int fi = plan.frequencyIndex;
-        double fixed = s.fixedHardLoss[fi];
+        double outputCapacitance = s.capacitanceLoss[fi];
+        double recovery = s.recoveryLoss[fi];
         double edgeOn = s.turnOnLossPerAmp[fi];
         double edgeOff = s.turnOffLossPerAmp[fi];
         double diode = s.diodeLossPerAmp[fi];
@@ -132,8 +133,8 @@ public final class DriveEvaluator implements PairingEvaluator {
             boolean pieceRunaway = false;
             for (int end = pieceEnd[k]; c < end; c += MotorSidePlan.CELL) {
                 double a = cells[c];
-                double b = cells[c + 1] * fixed + cells[c + 2] * edgeOn + cells[c + 3] * edgeOff
-                        + cells[c + 4] * diode;
+                double b = cells[c + 1] * outputCapacitance + cells[c + 2] * recovery + cells[c + 3] * edgeOn
+                        + cells[c + 4] * edgeOff + cells[c + 5] * diode;
                 double stability = 1.0 - factor * a;
                 double loss;
                 if (stability > 0) {
@@ -142,7 +143,7 @@ public final class DriveEvaluator implements PairingEvaluator {
                     pieceRunaway = true;
                     loss = cellLoss(s, a, b);
                 }
-                bridge += cells[c + 5] * loss;
+                bridge += cells[c + 6] * loss;
                 if (loss > lossMax) {
                     lossMax = loss;
                 }
@@ -342,14 +343,14 @@ public final class DriveEvaluator implements PairingEvaluator {
             for (int p = 0; p < 4; p++) {
                 int c = 4 * k + p;
                 double a = plan.conduction[c];
-                double b = otherLoss(s, fi, plan.hard[c], plan.turnOnCurrent[c], plan.turnOffCurrent[c],
+                double b = otherLoss(s, fi, plan.capacitance[c], plan.hard[c], plan.turnOnCurrent[c], plan.turnOffCurrent[c],
                         plan.freeCurrent[c]);
                 double cell = cellLoss(s, a, b);
                 double tj = cellJunction(s, a, cell, ambient);
                 double[] l = loss[p];
                 l[0] += t * (cell - b);
                 l[1] += t * edgeLoss(s, fi, plan.turnOnCurrent[c], plan.turnOffCurrent[c]);
-                l[2] += t * plan.hard[c] * s.capacitanceLoss[fi];
+                l[2] += t * plan.capacitance[c] * s.capacitanceLoss[fi];
                 l[3] += t * plan.freeCurrent[c] * s.diodeLossPerAmp[fi];
                 l[4] += t * plan.hard[c] * s.recoveryLoss[fi];
                 junction[p] = Math.max(junction[p], tj);

@@ -68,9 +68,14 @@ final class MotorSidePlan implements PairingEvaluator.MotorSide {
     final double[] conduction;
     /**
      * Per piece and position: hard turn-ons per period, weighted by the share of the piece
-     * ({@link ConductionPattern#hardTurnOns}: what C_oss and Q_rr are charged to; 0 for a zero-voltage turn-on).
+     * ({@link ConductionPattern#hardTurnOns}: what Q_rr is charged to; 0 for a zero-voltage or zero-current turn-on).
      */
     final double[] hard;
+    /**
+     * Per piece and position: ½·C_oss·V² dumps per period, weighted by the share of the piece
+     * ({@link ConductionPattern#outputCapacitanceDumps}: 1 per hard turn-on, 2 per turn-on at zero current).
+     */
+    final double[] capacitance;
     /**
      * Per piece and position: the current at the position's hard turn-on and at its hard turn-off, A, each in the
      * switch's forward direction and clamped at 0 ({@link ConductionPattern#turnOnCurrent}), weighted by the
@@ -84,10 +89,11 @@ final class MotorSidePlan implements PairingEvaluator.MotorSide {
      */
     final double[] freeCurrent;
     /**
-     * Doubles per fast-path cell: conduction, hard turn-ons, turn-on current, turn-off current, diode current,
-     * cycle weight × multiplicity.
+     * Doubles per fast-path cell: conduction, ½·C_oss·V² dumps, hard turn-ons (Q_rr), turn-on current, turn-off
+     * current, diode current, cycle weight × multiplicity. C_oss and Q_rr have separate entries because a turn-on
+     * at zero current dumps C_oss twice and recovers no diode.
      */
-    static final int CELL = 6;
+    static final int CELL = 7;
     /** Fast-path cells: for each piece, for each distinct busy position, {@link #CELL} doubles. */
     final double[] cells;
     /** Offset in {@link #cells} just past each piece's cells. */
@@ -153,6 +159,7 @@ final class MotorSidePlan implements PairingEvaluator.MotorSide {
         switchingCount = new double[n];
         conduction = new double[4 * n];
         hard = new double[4 * n];
+        capacitance = new double[4 * n];
         turnOnCurrent = new double[4 * n];
         turnOffCurrent = new double[4 * n];
         freeCurrent = new double[4 * n];
@@ -387,16 +394,17 @@ final class MotorSidePlan implements PairingEvaluator.MotorSide {
         for (int k = 0; k < n; k++) {
             for (int j = 0; j < count; j++) {
                 int at = 4 * k + rep[j];
-                if (conduction[at] == 0 && hard[at] == 0 && turnOnCurrent[at] == 0 && turnOffCurrent[at] == 0
+                if (conduction[at] == 0 && hard[at] == 0 && capacitance[at] == 0 && turnOnCurrent[at] == 0 && turnOffCurrent[at] == 0
                         && freeCurrent[at] == 0) {
                     continue;
                 }
                 packed[c] = conduction[at];
-                packed[c + 1] = hard[at];
-                packed[c + 2] = turnOnCurrent[at];
-                packed[c + 3] = turnOffCurrent[at];
-                packed[c + 4] = freeCurrent[at];
-                packed[c + 5] = weight[k] * mult[j];
+                packed[c + 1] = capacitance[at];
+                packed[c + 2] = hard[at];
+                packed[c + 3] = turnOnCurrent[at];
+                packed[c + 4] = turnOffCurrent[at];
+                packed[c + 5] = freeCurrent[at];
+                packed[c + 6] = weight[k] * mult[j];
                 c += CELL;
             }
             pieceEnd[k] = c;
@@ -407,6 +415,7 @@ final class MotorSidePlan implements PairingEvaluator.MotorSide {
     private boolean samePosition(int a, int b) {
         for (int k = 0; k < n; k++) {
             if (!close(conduction[4 * k + a], conduction[4 * k + b]) || !close(hard[4 * k + a], hard[4 * k + b])
+                    || !close(capacitance[4 * k + a], capacitance[4 * k + b])
                     || !close(turnOnCurrent[4 * k + a], turnOnCurrent[4 * k + b])
                     || !close(turnOffCurrent[4 * k + a], turnOffCurrent[4 * k + b])
                     || !close(freeCurrent[4 * k + a], freeCurrent[4 * k + b])) {
@@ -425,7 +434,7 @@ final class MotorSidePlan implements PairingEvaluator.MotorSide {
      * mean square from the exact ripple's interval moments, each body diode's dead-time current and each hard
      * turn-on, decided edge by edge from the signed current at the ripple's extremes
      * ({@link ConductionPattern#channelSquare}, {@link ConductionPattern#deadTimeDiodeCurrent},
-     * {@link ConductionPattern#hardTurnOns}), and the current at each hard edge
+     * {@link ConductionPattern#hardTurnOns}, {@link ConductionPattern#outputCapacitanceDumps}), and the current at each hard edge
      * ({@link ConductionPattern#turnOnCurrent}, {@link ConductionPattern#turnOffCurrent}).
      */
     private void addPattern(Modulation modulation, double voltageRatio, double deadFraction, RippleCache ripples,
@@ -436,6 +445,7 @@ final class MotorSidePlan implements PairingEvaluator.MotorSide {
         for (int p = 0; p < 4; p++) {
             conduction[base + p] += share * pattern.channelSquare(p, i, ms, w);
             hard[base + p] += share * pattern.hardTurnOns(p, i, w);
+            capacitance[base + p] += share * pattern.outputCapacitanceDumps(p, i, w);
             turnOnCurrent[base + p] += share * pattern.turnOnCurrent(p, i, w);
             turnOffCurrent[base + p] += share * pattern.turnOffCurrent(p, i, w);
             freeCurrent[base + p] += share * pattern.deadTimeDiodeCurrent(p, i, w);

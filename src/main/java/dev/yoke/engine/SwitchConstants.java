@@ -29,10 +29,9 @@ final class SwitchConstants {
     final double turnOffEdge;
     /** Time from the turn-off command until the channel stops, s (dead-time check). */
     final double turnOffTime;
-    /** Per frequency: loss per hard turn-on per period, independent of current (C_oss and Q_rr), W. */
-    final double[] fixedHardLoss;
-    /** Per frequency: the C_oss and the Q_rr parts of {@link #fixedHardLoss}, W (the detailed breakdown). */
+    /** Per frequency: ½·C_oss·V² per period, W (charged per output-capacitance dump). */
     final double[] capacitanceLoss;
+    /** Per frequency: Q_rr·V per period, W (charged per hard turn-on). */
     final double[] recoveryLoss;
     /**
      * Per frequency: V·I overlap loss per ampere of current at a hard turn-on and at a hard turn-off, W/A
@@ -67,7 +66,6 @@ final class SwitchConstants {
                 bench.gateDriveVoltage(), q.plateauVoltage(), rg);
         List<Double> frequencies = bench.pwmFrequencies();
         int nf = frequencies.size();
-        fixedHardLoss = new double[nf];
         capacitanceLoss = new double[nf];
         recoveryLoss = new double[nf];
         turnOnLossPerAmp = new double[nf];
@@ -79,7 +77,6 @@ final class SwitchConstants {
             double f = frequencies.get(i);
             capacitanceLoss[i] = SwitchLossLaws.outputCapacitance(q.outputCapacitance(), v, f);
             recoveryLoss[i] = SwitchLossLaws.reverseRecovery(q.reverseRecoveryCharge(), v, f);
-            fixedHardLoss[i] = capacitanceLoss[i] + recoveryLoss[i];
             turnOnLossPerAmp[i] = SwitchLossLaws.hardTurnOn(v, 1.0, turnOnEdge, f);
             turnOffLossPerAmp[i] = SwitchLossLaws.hardTurnOff(v, 1.0, turnOffEdge, f);
             diodeLossPerAmp[i] = SwitchLossLaws.deadTimeDiode(q.diodeForwardVoltage(), 1.0, bench.deadTime(), f);

@@ -7,7 +7,7 @@ package dev.yoke.engine;
  * @param conduction      the channel's mean-square current × R_DS(on)(T_j) over its on-fraction (dead times,
  *                        which its body diode carries, excluded)
  * @param switching       hard-edge V·I overlap loss
- * @param outputCapacitance ½·C_oss·V² at each hard turn-on
+ * @param outputCapacitance ½·C_oss·V² at each hard turn-on, C_oss·V² at each turn-on at exactly zero current
  * @param deadTimeDiode   body-diode conduction during the dead times, at the current's two ripple extremes
  * @param reverseRecovery Q_rr·V at each hard turn-on that commutates a diode
  */

@@ -291,20 +291,21 @@ public record ConductionPattern(
     }
 
     /**
-     * Hard turn-ons the position makes per period: 1 or 0, what the ½·C_oss·V² dump and the Q_rr·V of its
-     * partner's body diode are charged to. Decided at the instant of the turn-on from the signed current, by the
-     * rule of {@link #turnOnCurrent}: forward current in the switch turning on means its partner's diode was
-     * carrying it, so the channel must discharge its own C_oss and reverse-recover that diode (hard); reverse
-     * current means the partner's hard turn-off has already swung the node onto this switch's own body diode, so
-     * the load current has discharged C_oss and no diode is recovered by this switch: a zero-voltage turn-on,
-     * lossless in the ideal model (Mohan, Undeland &amp; Robbins, <i>Power Electronics</i>, ch. 9, and Erickson
-     * &amp; Maksimović, ch. 20, on zero-voltage switching, from memory). With continuous current this is the
-     * nominal hard switch ({@link #hardSwitching(int)}); with a ripple that reverses at the valley, neither switch
-     * of the leg turns on hard. Exactly zero current at the edge keeps the nominal assignment (the node does not
-     * move, so the switch turning on finds its C_oss charged). 0 for a leg that does not switch. Like the rest of
-     * the ideal-waveform model, this takes any reversed current as swinging the node within the dead time; a real
-     * leg needs about 2·C_oss·V/t_dead for that (both output capacitances recharged), and below it keeps part of
-     * the ½·C_oss·V² (incomplete zero-voltage switching), which is not modelled.
+     * Hard turn-ons the position makes per period: 1 or 0, what the Q_rr·V of its partner's body diode and the
+     * ½·C_oss·V² dump of {@link #outputCapacitanceDumps} are charged to. Decided at the instant of the turn-on from
+     * the signed current, by the rule of {@link #turnOnCurrent}: forward current in the switch turning on means its
+     * partner's diode was carrying it, so the channel must discharge its own C_oss and reverse-recover that diode
+     * (hard); reverse current means the partner's hard turn-off has already swung the node onto this switch's own
+     * body diode, so the load current has discharged C_oss and no diode is recovered by this switch: a zero-voltage
+     * turn-on, lossless in the ideal model (Mohan, Undeland &amp; Robbins, <i>Power Electronics</i>, ch. 9, and
+     * Erickson &amp; Maksimović, ch. 20, on zero-voltage switching, from memory). With continuous current this is
+     * the nominal hard switch ({@link #hardSwitching(int)}); with a ripple that reverses at the valley, neither
+     * switch of the leg turns on hard. Exactly zero current at the edge is not a hard turn-on: no body diode was
+     * conducting, so none is recovered (its C_oss loss is counted by {@link #outputCapacitanceDumps}). 0 for a leg
+     * that does not switch. Like the rest of the ideal-waveform model, this takes any reversed current as swinging
+     * the node within the dead time; a real leg needs about 2·C_oss·V/t_dead for that (both output capacitances
+     * recharged), and below it keeps part of the ½·C_oss·V² (incomplete zero-voltage switching), which is not
+     * modelled.
      *
      * @param position {@link #HIGH_A} … {@link #LOW_B}
      * @param current  average motor current I, A (positive from leg A to leg B)
@@ -315,8 +316,33 @@ public record ConductionPattern(
         if (hardSwitching[high] + hardSwitching[high + 1] == 0) {
             return 0.0;
         }
+        return forwardAtEdge(position, true, current, waveform) > 0 ? 1.0 : 0.0;
+    }
+
+    /**
+     * Output-capacitance energy the position's channel dissipates at its turn-on, per period, in units of
+     * ½·C_oss·V² (what {@link SwitchLossLaws#outputCapacitance} gives per unit): 1 at a hard turn-on
+     * ({@link #hardTurnOns}: its own C_oss discharged in its channel, the textbook count kept by this model), 0 at a
+     * zero-voltage turn-on, and 2 at a turn-on at exactly zero current. With no current at the edge nothing swings
+     * the node during the dead time, so it still sits at the rail of the switch that just turned off: the switch
+     * turning on discharges its own C_oss (½·C_oss·V² lost in its channel) and charges its partner's from the bus
+     * through its channel, the bus giving C_oss·V² of which ½·C_oss·V² is stored and ½·C_oss·V² lost (charging a
+     * capacitor from a voltage source through a resistance loses as much as it stores). That is C_oss·V² per turn-on
+     * for two equal linear C_oss, at each of the leg's two edges (Erickson &amp; Maksimović, <i>Fundamentals of Power
+     * Electronics</i>, 2nd ed., ch. 4, capacitive switching loss, from memory). No body diode conducted, so no Q_rr.
+     * 0 for a leg that does not switch.
+     *
+     * @param position {@link #HIGH_A} … {@link #LOW_B}
+     * @param current  average motor current I, A (positive from leg A to leg B)
+     * @param waveform the ripple at this pattern's voltage ({@link PwmRipple#waveform})
+     */
+    public double outputCapacitanceDumps(int position, double current, RippleWaveform waveform) {
+        int high = position & ~1;
+        if (hardSwitching[high] + hardSwitching[high + 1] == 0) {
+            return 0.0;
+        }
         double forward = forwardAtEdge(position, true, current, waveform);
-        return forward > 0 ? 1.0 : forward < 0 ? 0.0 : hardSwitching[position];
+        return forward > 0 ? 1.0 : forward < 0 ? 0.0 : 2.0;
     }
 
     /**

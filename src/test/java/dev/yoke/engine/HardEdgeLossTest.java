@@ -130,4 +130,43 @@ class HardEdgeLossTest {
             assertEquals(diode, l.deadTimeDiode(), 1e-9 * diode, "equal dead-time diode share " + p);
         }
     }
+
+    /**
+     * Exactly zero current and no ripple (unipolar at V = 0: both legs at ½ in phase, the output never leaves 0, so
+     * the motor at rest carries nothing): every switch turns on once per period with no current to swing the node,
+     * so each turn-on discharges its own C_oss and charges its partner's from the bus, C_oss·V² per turn-on
+     * (= 2 × ½·C_oss·V²: two equal linear capacitors, one discharged and one charged through the channel, each
+     * losing ½·C·V²; Erickson &amp; Maksimović, <i>Fundamentals of Power Electronics</i>, 2nd ed., ch. 4,
+     * capacitive switching loss, from memory). Per switch C_oss·V²·f, per leg 2·C_oss·V²·f, the bridge
+     * 4·C_oss·V²·f (by hand: 500 pF × 24² V² × 20 kHz = 5.76 mW per switch, 23.04 mW for the bridge); no body diode
+     * conducts, so no Q_rr, no dead-time diode loss and no V·I overlap. 1e-9 relative: rounding.
+     */
+    @Test
+    void zeroCurrentTurnOnsDumpBothOutputCapacitancesAndRecoverNoDiode() {
+        PowerSwitch q = BridgeConductionNgspiceTest.powerSwitch();
+        Case rest = new Case(Modulation.UNIPOLAR, 0.0, 0.0, 1);
+        Catalog catalog = new Catalog(List.of(BridgeConductionNgspiceTest.motor(rest)), List.of(q));
+        DriveEvaluator evaluator = (DriveEvaluator) DriveEvaluator.of(BridgeConductionNgspiceTest.scenario(rest),
+                catalog);
+        SegmentResult y = evaluator.explain(0, 0, 0, 0).segments().get(0);
+        assertEquals(0.0, y.currentAvg(), 0.0, "zero current");
+        assertEquals(0.0, y.currentRipplePp(), 0.0, "no ripple");
+        double perSwitch = q.outputCapacitance() * BUS * BUS * F;
+        assertEquals(5.76e-3, perSwitch, 1e-15, "hand algebra: 500 pF × 576 V² × 20 kHz");
+        double bridge = 0;
+        for (int p = 0; p < 4; p++) {
+            SwitchLoss l = y.switchLosses().get(p);
+            assertEquals(perSwitch, l.outputCapacitance(), 1e-9 * perSwitch, "C_oss·V²·f per switch " + p);
+            assertEquals(0.0, l.reverseRecovery(), 0.0, "no diode recovered " + p);
+            assertEquals(0.0, l.deadTimeDiode(), 0.0, "no dead-time diode current " + p);
+            assertEquals(0.0, l.switching(), 0.0, "no V·I overlap " + p);
+            assertEquals(0.0, l.conduction(), 0.0, "no channel current " + p);
+            bridge += l.total();
+        }
+        assertEquals(4 * perSwitch, bridge, 1e-9 * bridge, "bridge: two legs of 2·C_oss·V²·f");
+        double[] row = new double[Metric.COUNT];
+        evaluator.summarize(evaluator.prepare(0, 0, 0), 0, row);
+        double explained = evaluator.explain(0, 0, 0, 0).totals().bridgeLoss();
+        assertEquals(explained, row[Metric.BRIDGE_LOSS.ordinal()], 1e-9 * explained, "summarize equals explain");
+    }
 }

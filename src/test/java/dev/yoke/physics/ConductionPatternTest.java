@@ -320,4 +320,59 @@ class ConductionPatternTest {
             }
         }
     }
+
+    /**
+     * Exactly zero current at both edges (zero current and no ripple: e.g. unipolar at V = 0, or a resting segment):
+     * nothing swings the node in the dead time, so each switch turning on discharges its own C_oss and charges its
+     * partner's from the bus, C_oss·V² = 2 × ½·C_oss·V² in its channel (two equal linear capacitors: the discharged
+     * one loses ½·C·V², the one charged from the source loses as much as it stores, ½·C·V²; Erickson &amp;
+     * Maksimović, <i>Fundamentals of Power Electronics</i>, 2nd ed., ch. 4, capacitive switching loss, from memory).
+     * Every switching position turns on once per period, so a switching leg dumps 4 × ½·C_oss·V² per period; no
+     * body diode conducts, so no turn-on is hard (no Q_rr) and no diode carries a dead time. A held leg makes no
+     * edges. Exact: counts.
+     */
+    @ParameterizedTest
+    @MethodSource("table")
+    void zeroCurrentAtBothEdgesDumpsBothOutputCapacitancesAtEveryTurnOnAndRecoversNothing(Modulation m, double v,
+            int sign) {
+        double current = sign * 0.0;
+        ConductionPattern p = ConductionPattern.of(m, v, current);
+        // No ripple: the waveform of a zero swing (every edge then sees exactly the zero mean current).
+        RippleWaveform flat = PwmRipple.waveform(0.0, 1.0, 1e-3, p.rippleOnFraction(), p.ripplePeriodFactor() / 20e3);
+        assertEquals(0.0, flat.highDeviation(), 0.0, "no ripple");
+        assertEquals(0.0, flat.lowDeviation(), 0.0, "no ripple");
+        for (int high = 0; high < ConductionPattern.POSITIONS; high += 2) {
+            boolean switching = p.hardSwitching(high) + p.hardSwitching(high + 1) > 0;
+            double legDumps = 0;
+            for (int q = high; q <= high + 1; q++) {
+                String name = ConductionPattern.POSITION_NAMES[q];
+                assertEquals(switching ? 2.0 : 0.0, p.outputCapacitanceDumps(q, current, flat), 0.0, name + " dumps");
+                assertEquals(0.0, p.hardTurnOns(q, current, flat), 0.0, name + " no hard turn-on, no Q_rr");
+                assertEquals(0.0, p.deadTimeDiodeCurrent(q, current, flat), 0.0, name + " no diode current");
+                assertEquals(0.0, p.turnOnCurrent(q, current, flat), 0.0, name + " no V·I overlap");
+                legDumps += p.outputCapacitanceDumps(q, current, flat);
+            }
+            assertEquals(switching ? 4.0 : 0.0, legDumps, 0.0, ConductionPattern.POSITION_NAMES[high] + " leg");
+        }
+    }
+
+    /**
+     * Continuous current: the C_oss count is the hard turn-on count (1 × ½·C_oss·V² at each hard turn-on, 0 at its
+     * partner's soft one, common practice: clamped inductive switching); a reversing ripple: 0 for both (zero-voltage
+     * turn-ons, Mohan, Undeland &amp; Robbins, ch. 9, from memory). Exact: counts.
+     */
+    @ParameterizedTest
+    @MethodSource("table")
+    void outputCapacitanceDumpsFollowHardTurnOnsWheneverTheEdgeCurrentIsNotZero(Modulation m, double v, int sign) {
+        for (double[] c : new double[][] {{3.0, 1e-3}, {0.5, 1e-4}}) {
+            double current = sign * c[0];
+            ConductionPattern p = ConductionPattern.of(m, v, current);
+            RippleWaveform w = PwmRipple.waveform(p.rippleSwing() * 24, 1.0, c[1], p.rippleOnFraction(),
+                    p.ripplePeriodFactor() / 20e3);
+            for (int i = 0; i < ConductionPattern.POSITIONS; i++) {
+                assertEquals(p.hardTurnOns(i, current, w), p.outputCapacitanceDumps(i, current, w), 0.0,
+                        ConductionPattern.POSITION_NAMES[i] + " at " + current + " A");
+            }
+        }
+    }
 }
