@@ -165,8 +165,15 @@ class WindingThermalNetworkTest {
                 new double[] {slope * 10, 0}, new double[] {0, 0}, false);
         assertTrue(endless.runaway());
         assertTrue(Double.isFinite(endless.maxRise()));
-        WindingThermalResponse safe = net.respond(new double[] {1000, 10}, new double[] {50, 0},
+        // Gain 0.95: a steady state exists, 1/(1 − 0.95) = 20 times the cold rise. At 4 W that is
+        // 4·8·20 = 640 K, finite and kept; at 50 W it would be 8,000 K, past the 1,000 K beyond which the
+        // model means nothing (copper melts at 1085 °C), and is reported as a runaway.
+        WindingThermalResponse safe = net.respond(new double[] {1000, 10}, new double[] {4, 0},
                 new double[] {0.95 / (RWH + RHA), 0}, new double[] {0, 0}, true);
         assertFalse(safe.runaway());
+        WindingThermalResponse meaningless = net.respond(new double[] {1000, 10}, new double[] {50, 0},
+                new double[] {0.95 / (RWH + RHA), 0}, new double[] {0, 0}, true);
+        assertTrue(meaningless.runaway());
+        assertEquals(WindingThermalNetwork.MAX_RISE, meaningless.maxRise(), 1e-9);
     }
 }
