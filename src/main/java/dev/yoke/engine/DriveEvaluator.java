@@ -95,8 +95,8 @@ public final class DriveEvaluator implements PairingEvaluator {
     /** Temperature-independent loss of one cell, W. */
     static double otherLoss(SwitchConstants s, int fi, double capacitance, double hard, double turnOnCurrent,
             double turnOffCurrent, double freeCurrent) {
-        return capacitance * s.capacitanceLoss[fi] + hard * s.recoveryLoss[fi] + turnOnCurrent * s.turnOnLossPerAmp[fi]
-                + turnOffCurrent * s.turnOffLossPerAmp[fi] + freeCurrent * s.diodeLossPerAmp[fi];
+        return capacitance * s.capacitanceLoss[fi] + hard * s.recoveryLoss[fi]
+                + edgeLoss(s, fi, turnOnCurrent, turnOffCurrent) + freeCurrent * s.diodeLossPerAmp[fi];
     }
 
     /** V·I overlap loss of one cell's hard edges, W ({@link dev.yoke.physics.SwitchLossLaws#hardSwitching}). */
