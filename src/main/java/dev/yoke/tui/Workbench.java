@@ -24,6 +24,7 @@ import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
 import java.util.concurrent.atomic.AtomicBoolean;
+import java.util.function.Consumer;
 import java.util.function.Function;
 
 /**
@@ -313,14 +314,7 @@ public final class Workbench implements ScreenLoop {
             return false;
         }
         pendingExport = null;
-        try {
-            showMessage(f.get());
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-        } catch (CancellationException | ExecutionException e) {
-            Throwable cause = e.getCause() == null ? e : e.getCause();
-            showMessage("could not write the CSV: " + cause.getMessage());
-        }
+        deliver(f, this::showMessage, why -> showMessage("could not write the CSV: " + why));
         return true;
     }
 
@@ -336,17 +330,29 @@ public final class Workbench implements ScreenLoop {
             return false;
         }
         pendingView = null;
-        try {
-            showView(f.get(), pendingKeepRow);
+        deliver(f, view -> {
+            showView(view, pendingKeepRow);
             if (message.startsWith("sorting and filtering")) {
                 showMessage("");
             }
+        }, why -> showMessage("could not sort: " + why));
+        return true;
+    }
+
+    /** Hands a finished background task's value on, or the message of what stopped it. */
+    private static <T> void deliver(Future<T> done, Consumer<T> onValue, Consumer<String> onFailure) {
+        T value;
+        try {
+            value = done.get();
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();
+            return;
         } catch (CancellationException | ExecutionException e) {
-            showMessage("could not sort: " + e.getMessage());
+            Throwable cause = e.getCause() == null ? e : e.getCause();
+            onFailure.accept(cause.getMessage());
+            return;
         }
-        return true;
+        onValue.accept(value);
     }
 
     private int cursorRow() {
