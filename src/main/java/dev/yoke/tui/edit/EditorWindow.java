@@ -30,7 +30,7 @@ abstract class EditorWindow extends BasicWindow {
      * Whether the terminal shows Unicode; when not, unit symbols and marks are spelt in ASCII
      * ({@code Ohm}, {@code degC}, {@code N*m}) so nothing prints as '?'.
      */
-    final void setUnicode(boolean on) {
+    public final void useUnicode(boolean on) {
         this.unicode = on;
         unicodeChanged(on);
         refresh();

@@ -164,12 +164,6 @@ final class PartForm extends EditorWindow {
         ChoiceWindow.ask(gui, "Unsaved " + kind.noun(), "Discard the changes to this " + kind.noun() + "?", answers, unicode);
     }
 
-    /** Whether the terminal shows Unicode (else symbols are spelt in ASCII); returns this window. */
-    public PartForm useUnicode(boolean on) {
-        setUnicode(on);
-        return this;
-    }
-
     @Override
     void unicodeChanged(boolean on) {
         form.setUnicode(on);

@@ -394,12 +394,6 @@ public final class PartsEditor extends EditorWindow {
         return "deletion of " + kind.noun() + " " + ((PartChange.Remove) change).id();
     }
 
-    /** Whether the terminal shows Unicode (else symbols are spelt in ASCII); returns this window. */
-    public PartsEditor useUnicode(boolean on) {
-        setUnicode(on);
-        return this;
-    }
-
     @Override
     void unicodeChanged(boolean on) {
         list.setUnicode(on);

@@ -313,12 +313,6 @@ public final class ScenarioEditor extends EditorWindow {
                         : "Some values are invalid and the file is older than the screen.", answers, unicode);
     }
 
-    /** Whether the terminal shows Unicode (else symbols are spelt in ASCII); returns this window. */
-    public ScenarioEditor useUnicode(boolean on) {
-        setUnicode(on);
-        return this;
-    }
-
     @Override
     void unicodeChanged(boolean on) {
         form.setUnicode(on);
