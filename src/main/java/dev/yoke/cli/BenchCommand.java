@@ -74,6 +74,13 @@ public final class BenchCommand implements Callable<Integer> {
             spec.commandLine().getErr().println("yoke bench: counts must be at least 1 and --seconds positive");
             return YokeCommand.BAD_INPUT;
         }
+        for (String part : skip) {
+            if (!List.of("throughput", "rerank", "memory").contains(part)) {
+                spec.commandLine().getErr().println("yoke bench: --skip: unknown part '" + part
+                        + "'; the parts are throughput, rerank, memory");
+                return YokeCommand.BAD_INPUT;
+            }
+        }
         int cores = Runtime.getRuntime().availableProcessors();
         out.printf(Locale.ROOT, "yoke %s bench: %d cores, heap limit %d MB, %d worker threads, load average %.1f%n",
                 VersionProvider.version(), cores, Runtime.getRuntime().maxMemory() >> 20,

@@ -22,4 +22,12 @@ class BenchCommandTest {
     void nonsenseCountsAreBadInput() {
         assertEquals(2, run("bench", "--motors", "0").status());
     }
+
+    /** A misspelt part to skip is refused by name, not silently run (exit 2, the bad-input status). */
+    @Test
+    void unknownPartToSkipIsBadInputNamingTheParts() {
+        RankCommandTest.Run r = run("bench", "--skip", "rerank,memry");
+        assertEquals(2, r.status());
+        assertTrue(r.err().contains("unknown part 'memry'") && r.err().contains("throughput, rerank, memory"), r.err());
+    }
 }
